@@ -1,0 +1,443 @@
+package dev.fixmod.verify.vectors;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.fixmod.constellation.Normalization;
+import dev.fixmod.fixed.Overflow;
+import dev.fixmod.fixed.QFormat;
+import dev.fixmod.fixed.Quantizer;
+import dev.fixmod.fixed.Rounding;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Function;
+
+/**
+ * Reads a specification file into a {@link VectorSpec}, filling every default. Strict: duplicate keys, unknown keys,
+ * wrong types, non-finite numbers and values outside their sets are rejected with a {@link SpecException} naming the
+ * source, line and column, the JSON path of the offending key and what would be accepted. A spec may be as short as
+ * <pre>{"constellation": "nr:qam16"}</pre>
+ */
+public final class SpecReader {
+
+    private static final ObjectMapper MAPPER = JsonMapper.builder()
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .build();
+
+    /** Largest count accepted: a bound on the files' size, not on memory (generation is streamed). */
+    public static final long MAX_COUNT = 1_000_000_000L;
+
+    private static final List<String> ALGORITHMS = List.of("max-log", "log-map");
+
+    private final String source;
+    private final Map<String, JsonLocation> locations;
+    private final Function<VectorSpec.ConstellationChoice, ?> constellationCheck;
+
+    private SpecReader(String source, Map<String, JsonLocation> locations,
+            Function<VectorSpec.ConstellationChoice, ?> constellationCheck) {
+        this.source = source;
+        this.locations = locations;
+        this.constellationCheck = constellationCheck;
+    }
+
+    /**
+     * Parses {@code text}; {@code source} names it in messages (usually the file name). The constellation is
+     * checked by {@link ConstellationResolver#resolve}.
+     */
+    public static VectorSpec parse(String text, String source) {
+        return parse(text, source, ConstellationResolver::resolve);
+    }
+
+    static VectorSpec parse(String text, String source, Function<VectorSpec.ConstellationChoice, ?> constellationCheck) {
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            JsonLocation at = e.getLocation();
+            String where = at == null ? source : source + ":" + at.getLineNr() + ":" + at.getColumnNr();
+            String why = e.getOriginalMessage();
+            int hint = why.indexOf(": enable `");
+            if (hint >= 0) {
+                why = why.substring(0, hint) + "; numbers must be finite decimals";
+            }
+            throw new SpecException(where + ": not valid JSON: " + why);
+        }
+        if (root == null || root.isMissingNode()) {
+            throw new SpecException(source + ": empty specification; expected a JSON object such as"
+                    + " {\"constellation\": \"qam16\"}");
+        }
+        return new SpecReader(source, locate(text), constellationCheck).read(root);
+    }
+
+    /** Maps each JSON pointer of the document to where its key (or array element) starts. */
+    private static Map<String, JsonLocation> locate(String text) {
+        Map<String, JsonLocation> map = new HashMap<>();
+        try (JsonParser p = new JsonFactory().createParser(text)) {
+            JsonToken t;
+            while ((t = p.nextToken()) != null) {
+                if (t == JsonToken.END_OBJECT || t == JsonToken.END_ARRAY) {
+                    continue;
+                }
+                String pointer = p.getParsingContext().pathAsPointer().toString();
+                map.putIfAbsent(pointer, p.currentTokenLocation());
+            }
+        } catch (IOException e) {
+            throw new SpecException("cannot read the specification: " + e.getMessage());
+        }
+        return map;
+    }
+
+    private VectorSpec read(JsonNode root) {
+        ObjectNode top = object(root, "");
+        allow(top, "", "schema", "version", "name", "description", "constellation", "mapper", "demapper", "bits",
+                "noise", "count", "corner-cases", "formats");
+        String schema = string(top, "", "schema", VectorSpec.SCHEMA);
+        if (!schema.equals(VectorSpec.SCHEMA)) {
+            throw error("/schema", "'" + schema + "' is not this tool's schema; expected \"" + VectorSpec.SCHEMA + "\"");
+        }
+        long version = integer(top, "", "version", VectorSpec.VERSION, 1, Integer.MAX_VALUE);
+        if (version != VectorSpec.VERSION) {
+            throw error("/version", "version " + version + " is not supported; this tool reads version "
+                    + VectorSpec.VERSION);
+        }
+        string(top, "", "description", "");
+        VectorSpec.ConstellationChoice constellation = constellation(top);
+        String name = string(top, "", "name", constellation.name().replace(':', '-'));
+        if (!name.matches("[A-Za-z][A-Za-z0-9_-]{0,63}")) {
+            throw error("/name", "'" + name + "' is not a set name; expected a letter then up to 63 letters, digits,"
+                    + " '_' or '-' (it becomes part of file names and C identifiers)");
+        }
+        Quantizer mapper = quantizer(top, "", "mapper", "Q1.14", Rounding.HALF_EVEN, Overflow.SATURATE);
+        VectorSpec.Demapper demapper = demapper(top);
+        VectorSpec.BitSource bits = bits(top);
+        VectorSpec.Noise noise = noise(top);
+        long count = integer(top, "", "count", 256, 0, MAX_COUNT);
+        Set<CornerGroup> corners = nameSet(top, "", "corner-cases", CornerGroup.class);
+        Set<OutputFormat> formats = nameSet(top, "", "formats", OutputFormat.class);
+        return new VectorSpec(name, constellation, mapper, demapper, bits, noise, count, corners, formats);
+    }
+
+    private VectorSpec.ConstellationChoice constellation(ObjectNode top) {
+        JsonNode node = top.get("constellation");
+        String name = "qam16";
+        String labeling = null;
+        Normalization normalization = Normalization.UNIT_ENERGY;
+        if (node != null && node.isTextual()) {
+            name = node.asText();
+        } else if (node != null) {
+            ObjectNode c = object(node, "/constellation");
+            allow(c, "/constellation", "name", "labeling", "normalization");
+            name = string(c, "/constellation", "name", name);
+            labeling = c.has("labeling") ? string(c, "/constellation", "labeling", null) : null;
+            String norm = string(c, "/constellation", "normalization", normalization.tradeName());
+            try {
+                normalization = Normalization.fromName(norm);
+            } catch (IllegalArgumentException e) {
+                throw error("/constellation/normalization", e.getMessage());
+            }
+        }
+        if (labeling == null) {
+            labeling = name.contains(":") ? "standard" : "gray";
+        }
+        VectorSpec.ConstellationChoice choice = new VectorSpec.ConstellationChoice(name, labeling, normalization);
+        try {
+            constellationCheck.apply(choice);
+        } catch (IllegalArgumentException e) {
+            String at = node == null ? "/constellation" : node.isTextual() || !node.has("name") ? "/constellation"
+                    : e.getMessage().contains("labeling") && node.has("labeling") ? "/constellation/labeling"
+                    : "/constellation/name";
+            throw error(at, e.getMessage());
+        }
+        return choice;
+    }
+
+    private VectorSpec.Demapper demapper(ObjectNode top) {
+        ObjectNode d = optionalObject(top, "", "demapper");
+        allow(d, "/demapper", "input", "algorithm", "llr-scale", "llr", "llr-sign");
+        Quantizer input = quantizer(d, "/demapper", "input", "Q2.9", Rounding.HALF_EVEN, Overflow.SATURATE);
+        String algorithm = string(d, "/demapper", "algorithm", "max-log");
+        if (!ALGORITHMS.contains(algorithm)) {
+            throw error("/demapper/algorithm", "unknown algorithm '" + algorithm + "'; expected one of "
+                    + String.join(", ", ALGORITHMS));
+        }
+        double scale = number(d, "/demapper", "llr-scale", 1.0);
+        if (!(scale > 0)) {
+            throw error("/demapper/llr-scale", scale + " is not a valid scale; expected a finite number > 0");
+        }
+        Quantizer llr = quantizer(d, "/demapper", "llr", "Q5.0", Rounding.HALF_EVEN, Overflow.SYMMETRIC_SATURATE);
+        LlrSign sign = oneOf(d, "/demapper", "llr-sign", LlrSign.class, LlrSign.POSITIVE_ZERO);
+        return new VectorSpec.Demapper(input, algorithm, scale, llr, sign);
+    }
+
+    private VectorSpec.BitSource bits(ObjectNode top) {
+        String p = "/bits";
+        ObjectNode b = optionalObject(top, "", "bits");
+        String src = string(b, p, "source", "prbs23");
+        switch (src) {
+            case "prbs7", "prbs9", "prbs11", "prbs15", "prbs20", "prbs23", "prbs31" -> {
+                allow(b, p, "source", "seed");
+                int order = Integer.parseInt(src.substring(4));
+                long max = (1L << order) - 1;
+                long seed = integer(b, p, "seed", max, 1, max);
+                return new VectorSpec.BitSource(src, seed, 0, "");
+            }
+            case "constant", "alternating" -> {
+                allow(b, p, "source", "value");
+                long v = integer(b, p, "value", 0, 0, 1);
+                return new VectorSpec.BitSource(src, 0, (int) v, "");
+            }
+            case "file" -> {
+                allow(b, p, "source", "file");
+                if (!b.has("file")) {
+                    throw error(p, "source \"file\" needs the key \"file\": a text file of 0 and 1 characters,"
+                            + " relative to the specification");
+                }
+                String file = string(b, p, "file", null);
+                if (file.isBlank()) {
+                    throw error(p + "/file", "empty file name; expected a path relative to the specification");
+                }
+                return new VectorSpec.BitSource(src, 0, 0, file);
+            }
+            default -> throw error(p + "/source", "unknown bit source '" + src + "'; expected one of prbs7, prbs9,"
+                    + " prbs11, prbs15, prbs20, prbs23, prbs31, constant, alternating, file");
+        }
+    }
+
+    private VectorSpec.Noise noise(ObjectNode top) {
+        String p = "/noise";
+        ObjectNode n = optionalObject(top, "", "noise");
+        allow(n, p, "es-n0-db", "eb-n0-db", "code-rate", "seed");
+        if (n.has("es-n0-db") && n.has("eb-n0-db")) {
+            throw error(p + "/eb-n0-db", "give either es-n0-db or eb-n0-db, not both");
+        }
+        NoiseMeasure measure = n.has("eb-n0-db") ? NoiseMeasure.EB_N0 : NoiseMeasure.ES_N0;
+        List<Double> levels = new ArrayList<>();
+        String key = measure.tradeName();
+        if (!n.has(key)) {
+            levels.addAll(List.of(10.0, 20.0));
+        } else {
+            JsonNode arr = n.get(key);
+            if (!arr.isArray()) {
+                throw error(p + "/" + key, "expected an array of numbers in dB, e.g. [6.0, 12.0], got "
+                        + kind(arr));
+            }
+            for (int i = 0; i < arr.size(); i++) {
+                double v = finite(arr.get(i), p + "/" + key + "/" + i);
+                if (v < -50 || v > 100) {
+                    throw error(p + "/" + key + "/" + i, v + " dB is out of range; expected -50 to 100 dB");
+                }
+                levels.add(v);
+            }
+            if (levels.size() > 64) {
+                throw error(p + "/" + key, levels.size() + " levels; at most 64 are accepted");
+            }
+        }
+        double rate = number(n, p, "code-rate", 1.0);
+        if (!(rate > 0 && rate <= 1)) {
+            throw error(p + "/code-rate", rate + " is not a code rate; expected a number in (0, 1]");
+        }
+        long seed = integer(n, p, "seed", 1, 0, Long.MAX_VALUE);
+        return new VectorSpec.Noise(measure, levels, rate, seed);
+    }
+
+    private Quantizer quantizer(ObjectNode parent, String parentPath, String key, String format, Rounding rounding,
+            Overflow overflow) {
+        String p = parentPath + "/" + key;
+        ObjectNode q = optionalObject(parent, parentPath, key);
+        allow(q, p, "format", "rounding", "overflow");
+        QFormat f;
+        try {
+            f = QFormat.parse(string(q, p, "format", format));
+        } catch (SpecException e) {
+            throw e;
+        } catch (IllegalArgumentException e) {
+            throw error(p + "/format", e.getMessage());
+        }
+        if (!f.isSigned()) {
+            throw error(p + "/format", "'" + f + "' is unsigned; ports carry signed values, expected Qm.n or Qn");
+        }
+        if (f.wordLength() < 2) {
+            throw error(p + "/format", "'" + f + "' has a 1-bit word; expected at least 2 bits");
+        }
+        Rounding r;
+        try {
+            r = Rounding.fromName(string(q, p, "rounding", rounding.tradeName()));
+        } catch (SpecException e) {
+            throw e;
+        } catch (IllegalArgumentException e) {
+            throw error(p + "/rounding", e.getMessage());
+        }
+        Overflow o;
+        try {
+            o = Overflow.fromName(string(q, p, "overflow", overflow.tradeName()));
+        } catch (SpecException e) {
+            throw e;
+        } catch (IllegalArgumentException e) {
+            throw error(p + "/overflow", e.getMessage());
+        }
+        return new Quantizer(f, r, o);
+    }
+
+    private <E extends Enum<E> & TradeNamed> Set<E> nameSet(ObjectNode parent, String parentPath, String key,
+            Class<E> type) {
+        String p = parentPath + "/" + key;
+        JsonNode arr = parent.get(key);
+        if (arr == null) {
+            return EnumSet.allOf(type);
+        }
+        if (!arr.isArray()) {
+            throw error(p, "expected an array of names from " + TradeNamed.names(type) + ", got " + kind(arr));
+        }
+        EnumSet<E> set = EnumSet.noneOf(type);
+        for (int i = 0; i < arr.size(); i++) {
+            JsonNode e = arr.get(i);
+            if (!e.isTextual()) {
+                throw error(p + "/" + i, "expected a name from " + TradeNamed.names(type) + ", got " + kind(e));
+            }
+            E value = TradeNamed.find(type, e.asText());
+            if (value == null) {
+                throw error(p + "/" + i, "unknown name '" + e.asText() + "'; expected one of "
+                        + TradeNamed.names(type));
+            }
+            if (!set.add(value)) {
+                throw error(p + "/" + i, "'" + e.asText() + "' is listed twice");
+            }
+        }
+        return set;
+    }
+
+    private <E extends Enum<E> & TradeNamed> E oneOf(ObjectNode parent, String parentPath, String key, Class<E> type,
+            E fallback) {
+        String text = string(parent, parentPath, key, fallback.tradeName());
+        E value = TradeNamed.find(type, text);
+        if (value == null) {
+            throw error(parentPath + "/" + key, "unknown name '" + text + "'; expected one of " + TradeNamed.names(type));
+        }
+        return value;
+    }
+
+    private ObjectNode object(JsonNode node, String path) {
+        if (!node.isObject()) {
+            throw error(path, "expected a JSON object {...}, got " + kind(node));
+        }
+        return (ObjectNode) node;
+    }
+
+    private ObjectNode optionalObject(ObjectNode parent, String parentPath, String key) {
+        JsonNode n = parent.get(key);
+        return n == null ? MAPPER.createObjectNode() : object(n, parentPath + "/" + key);
+    }
+
+    private void allow(ObjectNode node, String path, String... keys) {
+        Set<String> allowed = Set.of(keys);
+        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
+            String k = it.next();
+            if (!allowed.contains(k)) {
+                throw error(path + "/" + escape(k), "unknown key \"" + k + "\"; expected one of "
+                        + String.join(", ", keys));
+            }
+        }
+    }
+
+    private String string(ObjectNode parent, String parentPath, String key, String fallback) {
+        JsonNode n = parent.get(key);
+        if (n == null) {
+            return fallback;
+        }
+        if (!n.isTextual()) {
+            throw error(parentPath + "/" + key, "expected a string, got " + kind(n));
+        }
+        return n.asText();
+    }
+
+    private long integer(ObjectNode parent, String parentPath, String key, long fallback, long min, long max) {
+        JsonNode n = parent.get(key);
+        String p = parentPath + "/" + key;
+        if (n == null) {
+            return fallback;
+        }
+        if (!n.isIntegralNumber() || !n.canConvertToLong()) {
+            throw error(p, "expected an integer from " + min + " to " + max + ", got " + kind(n));
+        }
+        long v = n.asLong();
+        if (v < min || v > max) {
+            throw error(p, v + " is out of range; expected an integer from " + min + " to " + max);
+        }
+        return v;
+    }
+
+    private double number(ObjectNode parent, String parentPath, String key, double fallback) {
+        JsonNode n = parent.get(key);
+        return n == null ? fallback : finite(n, parentPath + "/" + key);
+    }
+
+    private double finite(JsonNode n, String path) {
+        if (!n.isNumber()) {
+            throw error(path, "expected a number, got " + kind(n));
+        }
+        double v = n.asDouble();
+        if (!Double.isFinite(v)) {
+            throw error(path, n.asText() + " is not a finite number; expected a finite decimal number");
+        }
+        return v;
+    }
+
+    private static String kind(JsonNode n) {
+        if (n.isTextual()) {
+            return "the string \"" + n.asText() + "\"";
+        }
+        if (n.isNumber()) {
+            return "the number " + n.asText();
+        }
+        if (n.isBoolean()) {
+            return "the boolean " + n.asText();
+        }
+        if (n.isNull()) {
+            return "null";
+        }
+        return n.isArray() ? "an array" : "an object";
+    }
+
+    private static String escape(String key) {
+        return key.replace("~", "~0").replace("/", "~1");
+    }
+
+    /** An error at JSON pointer {@code pointer}, located in the source text when the key is present there. */
+    private SpecException error(String pointer, String message) {
+        JsonLocation at = locations.get(pointer);
+        String where = at == null ? source : source + ":" + at.getLineNr() + ":" + at.getColumnNr();
+        return new SpecException(where + ": " + display(pointer) + ": " + message);
+    }
+
+    /** {@code /noise/es-n0-db/2} becomes {@code noise.es-n0-db[2]}; the root is {@code (top level)}. */
+    static String display(String pointer) {
+        if (pointer.isEmpty()) {
+            return "(top level)";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (String part : pointer.substring(1).split("/", -1)) {
+            String k = part.replace("~1", "/").replace("~0", "~");
+            if (!k.isEmpty() && k.chars().allMatch(Character::isDigit) && sb.length() > 0) {
+                sb.append('[').append(k).append(']');
+            } else {
+                sb.append(sb.length() == 0 ? "" : ".").append(k);
+            }
+        }
+        return sb.toString();
+    }
+}
