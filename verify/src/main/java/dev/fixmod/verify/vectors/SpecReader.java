@@ -42,7 +42,9 @@ public final class SpecReader {
     /** Largest count accepted: a bound on the files' size, not on memory (generation is streamed). */
     public static final long MAX_COUNT = 1_000_000_000L;
 
-    private static final List<String> ALGORITHMS = List.of("max-log", "log-map");
+    private static final List<String> ALGORITHMS = List.of("max-log", "max-log-per-axis", "folded-linear");
+    private static final List<String> REFERENCES = List.of("log-map", "max-log", "max-log-per-axis", "folded-linear");
+    private static final List<String> GAUSSIANS = List.of("box-muller", "ziggurat");
 
     private final String source;
     private final Map<String, JsonLocation> locations;
@@ -168,20 +170,25 @@ public final class SpecReader {
 
     private VectorSpec.Demapper demapper(ObjectNode top) {
         ObjectNode d = optionalObject(top, "", "demapper");
-        allow(d, "/demapper", "input", "algorithm", "llr-scale", "llr", "llr-sign");
+        allow(d, "/demapper", "input", "algorithm", "reference", "llr-scale", "llr", "llr-sign");
         Quantizer input = quantizer(d, "/demapper", "input", "Q2.9", Rounding.HALF_EVEN, Overflow.SATURATE);
         String algorithm = string(d, "/demapper", "algorithm", "max-log");
         if (!ALGORITHMS.contains(algorithm)) {
             throw error("/demapper/algorithm", "unknown algorithm '" + algorithm + "'; expected one of "
                     + String.join(", ", ALGORITHMS));
         }
+        String reference = string(d, "/demapper", "reference", algorithm);
+        if (!REFERENCES.contains(reference)) {
+            throw error("/demapper/reference", "unknown algorithm '" + reference + "'; expected one of "
+                    + String.join(", ", REFERENCES));
+        }
         double scale = number(d, "/demapper", "llr-scale", 1.0);
         if (!(scale > 0)) {
             throw error("/demapper/llr-scale", scale + " is not a valid scale; expected a finite number > 0");
         }
         Quantizer llr = quantizer(d, "/demapper", "llr", "Q5.0", Rounding.HALF_EVEN, Overflow.SYMMETRIC_SATURATE);
-        LlrSign sign = oneOf(d, "/demapper", "llr-sign", LlrSign.class, LlrSign.POSITIVE_ZERO);
-        return new VectorSpec.Demapper(input, algorithm, scale, llr, sign);
+        LlrSign sign = oneOf(d, "/demapper", "llr-sign", LlrSign.class, LlrSign.ZERO_POSITIVE);
+        return new VectorSpec.Demapper(input, algorithm, reference, scale, llr, sign);
     }
 
     private VectorSpec.BitSource bits(ObjectNode top) {
@@ -221,7 +228,7 @@ public final class SpecReader {
     private VectorSpec.Noise noise(ObjectNode top) {
         String p = "/noise";
         ObjectNode n = optionalObject(top, "", "noise");
-        allow(n, p, "es-n0-db", "eb-n0-db", "code-rate", "seed");
+        allow(n, p, "es-n0-db", "eb-n0-db", "code-rate", "seed", "gaussian");
         if (n.has("es-n0-db") && n.has("eb-n0-db")) {
             throw error(p + "/eb-n0-db", "give either es-n0-db or eb-n0-db, not both");
         }
@@ -251,8 +258,13 @@ public final class SpecReader {
         if (!(rate > 0 && rate <= 1)) {
             throw error(p + "/code-rate", rate + " is not a code rate; expected a number in (0, 1]");
         }
-        long seed = integer(n, p, "seed", 1, 0, Long.MAX_VALUE);
-        return new VectorSpec.Noise(measure, levels, rate, seed);
+        long seed = integer(n, p, "seed", 1, 0, 0xFFFF_FFFFL);
+        String gaussian = string(n, p, "gaussian", "box-muller");
+        if (!GAUSSIANS.contains(gaussian)) {
+            throw error(p + "/gaussian", "unknown Gaussian sampler '" + gaussian + "'; expected one of "
+                    + String.join(", ", GAUSSIANS));
+        }
+        return new VectorSpec.Noise(measure, levels, rate, seed, gaussian);
     }
 
     private Quantizer quantizer(ObjectNode parent, String parentPath, String key, String format, Rounding rounding,

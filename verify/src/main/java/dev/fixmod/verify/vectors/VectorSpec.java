@@ -76,15 +76,17 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
      * The demapper: input quantizer, algorithm, LLR scale and output stage, sign convention.
      *
      * @param input     the demapper input port (channel samples quantized here)
-     * @param algorithm {@code max-log} or {@code log-map} (float reference) — the fixed datapath is max-log
+     * @param algorithm the fixed-point datapath: {@code max-log}, {@code max-log-per-axis} or {@code folded-linear}
+     * @param reference the float reference written beside it in the CSV: {@code log-map} or one of the above
      * @param llrScale  the LLR output's real value per unit of LLR (natural log units)
      * @param llr       the LLR output port
      * @param llrSign   the sign convention written
      */
-    public record Demapper(Quantizer input, String algorithm, double llrScale, Quantizer llr, LlrSign llrSign) {
+    public record Demapper(Quantizer input, String algorithm, String reference, double llrScale, Quantizer llr, LlrSign llrSign) {
         public Demapper {
             Objects.requireNonNull(input, "input");
             Objects.requireNonNull(algorithm, "algorithm");
+            Objects.requireNonNull(reference, "reference");
             Objects.requireNonNull(llr, "llr");
             Objects.requireNonNull(llrSign, "llrSign");
             if (!(llrScale > 0) || Double.isInfinite(llrScale)) {
@@ -119,11 +121,13 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
      * @param measure  whether {@code levelsDb} are E_s/N0 or E_b/N0 values
      * @param levelsDb the noise levels in dB, in the order written
      * @param codeRate the code rate r used to convert E_b/N0 to E_s/N0 ({@code 0 < r <= 1})
-     * @param seed     the noise generator's key
+     * @param seed     the noise generator's key (32 bits); level {@code i} uses stream {@code i}
+     * @param gaussian the Gaussian sampler: {@code box-muller} or {@code ziggurat}
      */
-    public record Noise(NoiseMeasure measure, List<Double> levelsDb, double codeRate, long seed) {
+    public record Noise(NoiseMeasure measure, List<Double> levelsDb, double codeRate, long seed, String gaussian) {
         public Noise {
             Objects.requireNonNull(measure, "measure");
+            Objects.requireNonNull(gaussian, "gaussian");
             levelsDb = List.copyOf(levelsDb);
             if (!(codeRate > 0 && codeRate <= 1)) {
                 throw new IllegalArgumentException("code-rate must lie in (0, 1], got " + codeRate);
@@ -152,6 +156,7 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
         ObjectNode d = root.putObject("demapper");
         putQuantizer(d.putObject("input"), demapper.input());
         d.put("algorithm", demapper.algorithm());
+        d.put("reference", demapper.reference());
         d.put("llr-scale", demapper.llrScale());
         putQuantizer(d.putObject("llr"), demapper.llr());
         d.put("llr-sign", demapper.llrSign().tradeName());
@@ -169,6 +174,7 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
         noise.levelsDb().forEach(levels::add);
         n.put("code-rate", noise.codeRate());
         n.put("seed", noise.seed());
+        n.put("gaussian", noise.gaussian());
         root.put("count", count);
         ArrayNode corners = root.putArray("corner-cases");
         EnumSet.allOf(CornerGroup.class).stream().filter(cornerCases::contains).forEach(g -> corners.add(g.tradeName()));

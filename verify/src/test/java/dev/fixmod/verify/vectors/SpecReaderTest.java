@@ -27,7 +27,7 @@ class SpecReaderTest {
         assertEquals(QFormat.parse("Q5.0"), s.demapper().llr().format());
         assertEquals(Overflow.SYMMETRIC_SATURATE, s.demapper().llr().overflow());
         assertEquals(Rounding.HALF_EVEN, s.demapper().input().rounding());
-        assertEquals(LlrSign.POSITIVE_ZERO, s.demapper().llrSign());
+        assertEquals(LlrSign.ZERO_POSITIVE, s.demapper().llrSign());
         assertEquals("prbs23", s.bits().source());
         assertEquals((1L << 23) - 1, s.bits().seed());
         assertEquals(List.of(10.0, 20.0), s.noise().levelsDb());
@@ -86,9 +86,12 @@ class SpecReaderTest {
             {"formats": "hex"}                                          | formats: expected an array of names from hex, csv, bin, c, npy, got the string "hex"
             {"corner-cases": ["zero", "zero"]}                          | corner-cases[1]: 'zero' is listed twice
             {"corner-cases": [null]}                                    | corner-cases[0]: expected a name from labels, thresholds, ties, extremes, zero, llr-limits, got null
-            {"demapper": {"algorithm": "exact"}}                        | demapper.algorithm: unknown algorithm 'exact'; expected one of max-log, log-map
+            {"demapper": {"algorithm": "log-map"}}                      | demapper.algorithm: unknown algorithm 'log-map'; expected one of max-log, max-log-per-axis, folded-linear
+            {"demapper": {"reference": "exact"}}                        | demapper.reference: unknown algorithm 'exact'; expected one of log-map, max-log
+            {"noise": {"seed": 4294967296}}                             | noise.seed: 4294967296 is out of range; expected an integer from 0 to 4294967295
+            {"noise": {"gaussian": "polar"}}                            | noise.gaussian: unknown Gaussian sampler 'polar'; expected one of box-muller, ziggurat
             {"demapper": {"llr-scale": -1}}                             | demapper.llr-scale: -1.0 is not a valid scale
-            {"demapper": {"llr-sign": "negative"}}                      | demapper.llr-sign: unknown name 'negative'; expected one of positive-zero, positive-one
+            {"demapper": {"llr-sign": "negative"}}                      | demapper.llr-sign: unknown name 'negative'; expected one of zero-positive, one-positive
             {"constellation": {"name": "qam17"}}                        | s.json:1:20: constellation.name: square QAM order must be a power of two in 4..4096, got 17
             {"constellation": {"name": "qam16", "labeling": "spiral"}}  | constellation.labeling: unknown labeling 'spiral'
             {"constellation": {"normalization": "unit"}}                | constellation.normalization: unknown normalization 'unit'; expected one of none, unit-energy
