@@ -11,7 +11,7 @@ package dev.fixmod.verify.noise;
  * {@code i = w & 127}, sign bit {@code (w >>> 7) & 1}, {@code u = unit(w)} (its top 53 bits); bits 8–10 are unused.
  * <pre>
  *   x = u·X[i]
- *   if x &lt; X[i+1]                 accept ±x                      (rectangle; ~98.8 % of all words)
+ *   if x &lt; X[i+1]                 accept ±x                      (rectangle; ~97.2 % of all words)
  *   else if i == 0                  tail: repeat { a = open(next), b = open(next),
  *                                                  s = −log(a) / R, t = −log(b) } until t + t ≥ s·s,
  *                                   accept ±(R + s)
