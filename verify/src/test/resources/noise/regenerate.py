@@ -299,7 +299,7 @@ ZIG_X[1] = ZIG_R
 for _i in range(1, ZIG_LAYERS - 1):
     ZIG_X[_i + 1] = math.sqrt(-2.0 * fd_log(ZIG_V / ZIG_X[_i] + _f(ZIG_X[_i])))
 ZIG_X[ZIG_LAYERS] = 0.0
-ZIG_Y = [_f(x) for x in ZIG_X]
+ZIG_Y = [0.0] + [_f(x) for x in ZIG_X[1:]]
 
 
 def _words(seed, stream, n):

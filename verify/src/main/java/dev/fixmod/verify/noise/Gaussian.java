@@ -14,7 +14,7 @@ import java.util.Locale;
  *     <tr><td>{@link #BOX_MULLER}</td><td>{@code box-muller}</td><td>one Philox block per pair; log, sqrt,
  *         cos, sin</td><td>reference</td></tr>
  *     <tr><td>{@link #ZIGGURAT}</td><td>{@code ziggurat}</td><td>128-layer ziggurat, one 64-bit draw per sample,
- *         retries (~1.2 %) from a separate counter space</td><td>fast: no transcendental function on ~98.8 % of
+ *         retries (~2.8 %) from a separate counter space</td><td>fast: no transcendental function on ~97.2 % of
  *         samples</td></tr>
  *   </tbody>
  * </table>

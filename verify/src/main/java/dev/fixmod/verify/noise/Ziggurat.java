@@ -11,7 +11,7 @@ package dev.fixmod.verify.noise;
  * {@code i = w & 127}, sign bit {@code (w >>> 7) & 1}, {@code u = unit(w)} (its top 53 bits); bits 8–10 are unused.
  * <pre>
  *   x = u·X[i]
- *   if x &lt; X[i+1]                 accept ±x                      (rectangle; ~98.8 % of all words)
+ *   if x &lt; X[i+1]                 accept ±x                      (rectangle; ~97.2 % of all words)
  *   else if i == 0                  tail: repeat { a = open(next), b = open(next),
  *                                                  s = −log(a) / R, t = −log(b) } until t + t ≥ s·s,
  *                                   accept ±(R + s)
@@ -20,7 +20,8 @@ package dev.fixmod.verify.noise;
  * </pre>
  * Tables, built once with StrictMath: R = 3.442619855899, V = 9.91256303526217e−3 (Marsaglia–Tsang's constants for
  * 128 layers), X[0] = V / f(R), X[1] = R, X[i+1] = sqrt(−2·log(V / X[i] + f(X[i]))) for i = 1 … 126, X[128] = 0,
- * Y[i] = f(X[i]); f(x) is computed as {@code exp(−0.5·x·x)}.
+ * Y[0] = 0 and Y[i] = f(X[i]) for i ≥ 1 (so layer i spans heights Y[i] … Y[i+1]); f(x) is computed as
+ * {@code exp(−0.5·x·x)}.
  */
 final class Ziggurat {
 
@@ -30,7 +31,7 @@ final class Ziggurat {
 
     /** Layer edges X[0 … 128] (X[0] is the base layer's virtual width); read-only after class initialization. */
     static final double[] X = new double[LAYERS + 1];
-    /** f(X[i]); Y[128] = 1. */
+    /** Layer bottoms: Y[0] = 0 (base layer), Y[i] = f(X[i]); Y[128] = 1. */
     static final double[] Y = new double[LAYERS + 1];
 
     static {
@@ -40,7 +41,7 @@ final class Ziggurat {
             X[i + 1] = StrictMath.sqrt(-2.0 * StrictMath.log(V / X[i] + f(X[i])));
         }
         X[LAYERS] = 0.0;
-        for (int i = 0; i <= LAYERS; i++) {
+        for (int i = 1; i <= LAYERS; i++) {
             Y[i] = f(X[i]);
         }
     }
