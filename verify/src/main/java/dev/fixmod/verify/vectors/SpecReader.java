@@ -11,7 +11,16 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.fixmod.bits.Prbs;
+import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Normalization;
+import dev.fixmod.demap.FixedLlrSpec;
+import dev.fixmod.demap.FixedSoftDemapper;
+import dev.fixmod.demap.LlrOptions;
+import dev.fixmod.demap.LlrScaling;
+import dev.fixmod.demap.LlrSign;
+import dev.fixmod.demap.SoftAlgorithm;
+import dev.fixmod.demap.SoftDemapper;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
@@ -42,16 +51,15 @@ public final class SpecReader {
     /** Largest count accepted: a bound on the files' size, not on memory (generation is streamed). */
     public static final long MAX_COUNT = 1_000_000_000L;
 
-    private static final List<String> ALGORITHMS = List.of("max-log", "max-log-per-axis", "folded-linear");
-    private static final List<String> REFERENCES = List.of("log-map", "max-log", "max-log-per-axis", "folded-linear");
     private static final List<String> GAUSSIANS = List.of("box-muller", "ziggurat");
 
     private final String source;
     private final Map<String, JsonLocation> locations;
-    private final Function<VectorSpec.ConstellationChoice, ?> constellationCheck;
+    private final Function<VectorSpec.ConstellationChoice, Constellation> constellationCheck;
+    private Constellation resolved;
 
     private SpecReader(String source, Map<String, JsonLocation> locations,
-            Function<VectorSpec.ConstellationChoice, ?> constellationCheck) {
+            Function<VectorSpec.ConstellationChoice, Constellation> constellationCheck) {
         this.source = source;
         this.locations = locations;
         this.constellationCheck = constellationCheck;
@@ -65,7 +73,7 @@ public final class SpecReader {
         return parse(text, source, ConstellationResolver::resolve);
     }
 
-    static VectorSpec parse(String text, String source, Function<VectorSpec.ConstellationChoice, ?> constellationCheck) {
+    static VectorSpec parse(String text, String source, Function<VectorSpec.ConstellationChoice, Constellation> constellationCheck) {
         JsonNode root;
         try {
             root = MAPPER.readTree(text);
@@ -125,9 +133,9 @@ public final class SpecReader {
                     + " '_' or '-' (it becomes part of file names and C identifiers)");
         }
         Quantizer mapper = quantizer(top, "", "mapper", "Q1.14", Rounding.HALF_EVEN, Overflow.SATURATE);
-        VectorSpec.Demapper demapper = demapper(top);
         VectorSpec.BitSource bits = bits(top);
         VectorSpec.Noise noise = noise(top);
+        VectorSpec.Demapper demapper = demapper(top, noise);
         long count = integer(top, "", "count", 256, 0, MAX_COUNT);
         Set<CornerGroup> corners = nameSet(top, "", "corner-cases", CornerGroup.class);
         Set<OutputFormat> formats = nameSet(top, "", "formats", OutputFormat.class);
@@ -135,74 +143,126 @@ public final class SpecReader {
     }
 
     private VectorSpec.ConstellationChoice constellation(ObjectNode top) {
+        String p = "/constellation";
         JsonNode node = top.get("constellation");
         String name = "qam16";
-        String labeling = null;
+        String labeling = ConstellationResolver.DEFAULT_LABELING;
         Normalization normalization = Normalization.UNIT_ENERGY;
+        double phase = 0;
         if (node != null && node.isTextual()) {
             name = node.asText();
         } else if (node != null) {
-            ObjectNode c = object(node, "/constellation");
-            allow(c, "/constellation", "name", "labeling", "normalization");
-            name = string(c, "/constellation", "name", name);
-            labeling = c.has("labeling") ? string(c, "/constellation", "labeling", null) : null;
-            String norm = string(c, "/constellation", "normalization", normalization.tradeName());
-            try {
-                normalization = Normalization.fromName(norm);
-            } catch (IllegalArgumentException e) {
-                throw error("/constellation/normalization", e.getMessage());
-            }
+            ObjectNode c = object(node, p);
+            allow(c, p, "name", "labeling", "normalization", "phase-offset-degrees");
+            name = string(c, p, "name", name);
+            labeling = string(c, p, "labeling", labeling);
+            normalization = named(c, p, "normalization", normalization.tradeName(), Normalization::fromName);
+            phase = number(c, p, "phase-offset-degrees", 0.0);
         }
-        if (labeling == null) {
-            labeling = name.contains(":") ? "standard" : "gray";
-        }
-        VectorSpec.ConstellationChoice choice = new VectorSpec.ConstellationChoice(name, labeling, normalization);
+        VectorSpec.ConstellationChoice choice = new VectorSpec.ConstellationChoice(name, labeling, normalization,
+                phase);
         try {
-            constellationCheck.apply(choice);
+            resolved = constellationCheck.apply(choice);
         } catch (IllegalArgumentException e) {
-            String at = node == null ? "/constellation" : node.isTextual() || !node.has("name") ? "/constellation"
-                    : e.getMessage().contains("labeling") && node.has("labeling") ? "/constellation/labeling"
-                    : "/constellation/name";
+            String at = node == null || node.isTextual() ? p
+                    : e.getMessage().contains("label") && node.has("labeling") ? p + "/labeling"
+                    : e.getMessage().contains("phase") && node.has("phase-offset-degrees") ? p + "/phase-offset-degrees"
+                    : node.has("name") ? p + "/name" : p;
             throw error(at, e.getMessage());
         }
         return choice;
     }
 
-    private VectorSpec.Demapper demapper(ObjectNode top) {
+    private VectorSpec.Demapper demapper(ObjectNode top, VectorSpec.Noise noise) {
+        String p = "/demapper";
         ObjectNode d = optionalObject(top, "", "demapper");
-        allow(d, "/demapper", "input", "algorithm", "reference", "llr-scale", "llr", "llr-sign");
-        Quantizer input = quantizer(d, "/demapper", "input", "Q2.9", Rounding.HALF_EVEN, Overflow.SATURATE);
-        String algorithm = string(d, "/demapper", "algorithm", "max-log");
-        if (!ALGORITHMS.contains(algorithm)) {
-            throw error("/demapper/algorithm", "unknown algorithm '" + algorithm + "'; expected one of "
-                    + String.join(", ", ALGORITHMS));
+        allow(d, p, "input", "algorithm", "reference", "scaling", "design-es-n0-db", "constant-rounding", "metric",
+                "scale-constant", "scale", "llr", "llr-sign");
+        Quantizer input = quantizer(d, p, "input", "Q2.9", Rounding.HALF_EVEN, Overflow.SATURATE);
+        SoftAlgorithm algorithm = named(d, p, "algorithm", "max-log", SoftAlgorithm::fromName);
+        if (algorithm == SoftAlgorithm.LOG_MAP) {
+            throw error(p + "/algorithm", "log-map has no fixed-point datapath; expected max-log, max-log-per-axis"
+                    + " or folded-linear (log-map may be the float reference: key \"reference\")");
         }
-        String reference = string(d, "/demapper", "reference", algorithm);
-        if (!REFERENCES.contains(reference)) {
-            throw error("/demapper/reference", "unknown algorithm '" + reference + "'; expected one of "
-                    + String.join(", ", REFERENCES));
+        SoftAlgorithm reference = named(d, p, "reference", algorithm.tradeName(), SoftAlgorithm::fromName);
+        LlrScaling scaling = named(d, p, "scaling", LlrScaling.NOISE_SCALED.tradeName(), LlrScaling::fromName);
+        double design = number(d, p, "design-es-n0-db", 10.0);
+        if (design < -50 || design > 100) {
+            throw error(p + "/design-es-n0-db", design + " dB is out of range; expected -50 to 100 dB");
         }
-        double scale = number(d, "/demapper", "llr-scale", 1.0);
-        if (!(scale > 0)) {
-            throw error("/demapper/llr-scale", scale + " is not a valid scale; expected a finite number > 0");
+        Rounding constants = named(d, p, "constant-rounding", Rounding.HALF_EVEN.tradeName(), Rounding::fromName);
+        LlrSign sign = named(d, p, "llr-sign", LlrSign.ZERO_POSITIVE.tradeName(), LlrSign::fromName);
+        Quantizer llr = quantizer(d, p, "llr", "Q5.0", Rounding.HALF_EVEN, Overflow.SYMMETRIC_SATURATE);
+        QFormat outputFormat = llr.format();
+        // The suggested stages are sized for the largest K the set uses (the smallest N0 of any level).
+        int k = resolved.bitsPerSymbol();
+        double esN0 = design;
+        for (int l = 0; l < noise.levelsDb().size(); l++) {
+            esN0 = Math.max(esN0, noise.esN0Db(l, k));
         }
-        Quantizer llr = quantizer(d, "/demapper", "llr", "Q5.0", Rounding.HALF_EVEN, Overflow.SYMMETRIC_SATURATE);
-        LlrSign sign = oneOf(d, "/demapper", "llr-sign", LlrSign.class, LlrSign.ZERO_POSITIVE);
-        return new VectorSpec.Demapper(input, algorithm, reference, scale, llr, sign);
+        LlrOptions options = LlrOptions.fromEsN0Db(resolved, esN0, sign, false);
+        FixedLlrSpec suggested;
+        try {
+            suggested = FixedLlrSpec.suggested(algorithm, resolved, options, input.format(), outputFormat);
+        } catch (IllegalArgumentException e) {
+            throw error(d.has("algorithm") ? p + "/algorithm" : p, e.getMessage());
+        }
+        Quantizer metric = quantizer(d, p, "metric", suggested.metric().format().toString(),
+                suggested.metric().rounding(), suggested.metric().overflow());
+        QFormat scaleConstant = null;
+        Quantizer scale = null;
+        if (scaling == LlrScaling.NOISE_SCALED) {
+            String kf = string(d, p, "scale-constant", suggested.scaleConstant().toString());
+            try {
+                scaleConstant = QFormat.parse(kf);
+            } catch (IllegalArgumentException e) {
+                throw error(p + "/scale-constant", e.getMessage());
+            }
+            scale = quantizer(d, p, "scale", suggested.scale().format().toString(), suggested.scale().rounding(),
+                    suggested.scale().overflow());
+        } else {
+            for (String key : new String[] {"scale-constant", "scale"}) {
+                if (d.has(key)) {
+                    throw error(p + "/" + key, "an unscaled datapath has no " + key + "; remove the key or use"
+                            + " \"scaling\": \"noise-scaled\"");
+                }
+            }
+        }
+        VectorSpec.Demapper demapper = new VectorSpec.Demapper(input, algorithm, reference, scaling, design, constants,
+                metric, scaleConstant, scale, llr, sign);
+        // Build the datapath once for every N0 the set uses, so that a K that does not fit is reported here.
+        try {
+            FixedLlrSpec fixed = demapper.fixedSpec();
+            List<Double> levels = new ArrayList<>();
+            levels.add(design);
+            for (int l = 0; l < noise.levelsDb().size(); l++) {
+                levels.add(noise.esN0Db(l, k));
+            }
+            for (double level : levels) {
+                LlrOptions o = LlrOptions.fromEsN0Db(resolved, level, sign, false);
+                FixedSoftDemapper.create(algorithm, resolved, o, fixed);
+                SoftDemapper.create(reference, resolved, o);
+            }
+        } catch (IllegalArgumentException e) {
+            throw error(p, e.getMessage());
+        }
+        return demapper;
+    }
+
+    private <T> T named(ObjectNode parent, String parentPath, String key, String fallback, Function<String, T> lookup) {
+        String text = string(parent, parentPath, key, fallback);
+        try {
+            return lookup.apply(text);
+        } catch (IllegalArgumentException e) {
+            throw error(parentPath + "/" + key, e.getMessage());
+        }
     }
 
     private VectorSpec.BitSource bits(ObjectNode top) {
         String p = "/bits";
         ObjectNode b = optionalObject(top, "", "bits");
-        String src = string(b, p, "source", "prbs23");
+        String src = string(b, p, "source", Prbs.PRBS_23.tradeName());
         switch (src) {
-            case "prbs7", "prbs9", "prbs11", "prbs15", "prbs20", "prbs23", "prbs31" -> {
-                allow(b, p, "source", "seed");
-                int order = Integer.parseInt(src.substring(4));
-                long max = (1L << order) - 1;
-                long seed = integer(b, p, "seed", max, 1, max);
-                return new VectorSpec.BitSource(src, seed, 0, "");
-            }
             case "constant", "alternating" -> {
                 allow(b, p, "source", "value");
                 long v = integer(b, p, "value", 0, 0, 1);
@@ -220,8 +280,18 @@ public final class SpecReader {
                 }
                 return new VectorSpec.BitSource(src, 0, 0, file);
             }
-            default -> throw error(p + "/source", "unknown bit source '" + src + "'; expected one of prbs7, prbs9,"
-                    + " prbs11, prbs15, prbs20, prbs23, prbs31, constant, alternating, file");
+            default -> {
+                Prbs prbs;
+                try {
+                    prbs = Prbs.fromName(src);
+                } catch (IllegalArgumentException e) {
+                    throw error(p + "/source", "unknown bit source '" + src + "'; expected one of " + Prbs.names()
+                            + ", constant, alternating, file");
+                }
+                allow(b, p, "source", "seed");
+                long seed = integer(b, p, "seed", prbs.defaultSeed(), 1, prbs.period());
+                return new VectorSpec.BitSource(prbs.tradeName(), seed, 0, "");
+            }
         }
     }
 
@@ -331,16 +401,6 @@ public final class SpecReader {
             }
         }
         return set;
-    }
-
-    private <E extends Enum<E> & TradeNamed> E oneOf(ObjectNode parent, String parentPath, String key, Class<E> type,
-            E fallback) {
-        String text = string(parent, parentPath, key, fallback.tradeName());
-        E value = TradeNamed.find(type, text);
-        if (value == null) {
-            throw error(parentPath + "/" + key, "unknown name '" + text + "'; expected one of " + TradeNamed.names(type));
-        }
-        return value;
     }
 
     private ObjectNode object(JsonNode node, String path) {

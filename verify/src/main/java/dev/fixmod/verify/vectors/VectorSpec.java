@@ -4,7 +4,13 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.fixmod.constellation.Normalization;
+import dev.fixmod.demap.FixedLlrSpec;
+import dev.fixmod.demap.LlrScaling;
+import dev.fixmod.demap.LlrSign;
+import dev.fixmod.demap.SoftAlgorithm;
+import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
+import dev.fixmod.fixed.Rounding;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Objects;
@@ -61,10 +67,13 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
      * The constellation: a catalogue name (family or published profile), its labeling and normalization.
      *
      * @param name          e.g. {@code qam16}, {@code nr:qam64}, {@code wlan:qam1024}, {@code psk8}
-     * @param labeling      {@code gray}, {@code natural}, or {@code standard} (the profile's own, for profiles)
+     * @param labeling      {@code gray}, {@code natural}, {@code quasi-gray}, or {@code default} (the name's own:
+     *                      Gray for families, the standard's for profiles)
      * @param normalization how the points are scaled before the mapper ROM is quantized
+     * @param phaseOffsetDegrees the angle of PSK point 0 (PSK only)
      */
-    public record ConstellationChoice(String name, String labeling, Normalization normalization) {
+    public record ConstellationChoice(String name, String labeling, Normalization normalization,
+            double phaseOffsetDegrees) {
         public ConstellationChoice {
             Objects.requireNonNull(name, "name");
             Objects.requireNonNull(labeling, "labeling");
@@ -73,32 +82,45 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
     }
 
     /**
-     * The demapper: input quantizer, algorithm, LLR scale and output stage, sign convention.
+     * The demapper: input quantizer, fixed LLR datapath stages, float reference, sign convention.
      *
-     * @param input     the demapper input port (channel samples quantized here)
-     * @param algorithm the fixed-point datapath: {@code max-log}, {@code max-log-per-axis} or {@code folded-linear}
-     * @param reference the float reference written beside it in the CSV: {@code log-map} or one of the above
-     * @param llrScale  the LLR output's real value per unit of LLR (natural log units)
-     * @param llr       the LLR output port
-     * @param llrSign   the sign convention written
+     * @param input            the demapper input port (channel samples are quantized here)
+     * @param algorithm        the fixed-point datapath: {@code max-log}, {@code max-log-per-axis} or {@code folded-linear}
+     * @param reference        the float reference written beside it in the CSV: {@code log-map} or one of the above
+     * @param scaling          {@code noise-scaled} (output in nats, K = 1/N0 per noise level) or {@code unscaled}
+     * @param designEsN0Db     the E_s/N0 whose N0 sets K for vectors without noise (labels, corner inputs)
+     * @param constantRounding how levels, fold thresholds and K are quantized once
+     * @param metric           the metric stage
+     * @param scaleConstant    the format of K; null when unscaled
+     * @param scale            the product stage; null when unscaled
+     * @param llr              the LLR output port
+     * @param llrSign          the sign convention of the LLR port
      */
-    public record Demapper(Quantizer input, String algorithm, String reference, double llrScale, Quantizer llr, LlrSign llrSign) {
+    public record Demapper(Quantizer input, SoftAlgorithm algorithm, SoftAlgorithm reference, LlrScaling scaling,
+            double designEsN0Db, Rounding constantRounding, Quantizer metric, QFormat scaleConstant, Quantizer scale,
+            Quantizer llr, LlrSign llrSign) {
         public Demapper {
             Objects.requireNonNull(input, "input");
             Objects.requireNonNull(algorithm, "algorithm");
             Objects.requireNonNull(reference, "reference");
+            Objects.requireNonNull(scaling, "scaling");
+            Objects.requireNonNull(constantRounding, "constantRounding");
+            Objects.requireNonNull(metric, "metric");
             Objects.requireNonNull(llr, "llr");
             Objects.requireNonNull(llrSign, "llrSign");
-            if (!(llrScale > 0) || Double.isInfinite(llrScale)) {
-                throw new IllegalArgumentException("llr-scale must be a finite number > 0, got " + llrScale);
-            }
+        }
+
+        /** The kernel's stage formats of the fixed LLR datapath. */
+        public FixedLlrSpec fixedSpec() {
+            return new FixedLlrSpec(input.format(), constantRounding, metric, scaling, scaleConstant, scale, llr);
         }
     }
 
     /**
      * The stimulus bits.
      *
-     * @param source {@code prbs7 … prbs31}, {@code constant}, {@code alternating} or {@code file}
+     * @param source a PRBS of ITU-T O.150 ({@code prbs-7} … {@code prbs-31}), {@code constant}, {@code alternating}
+     *               or {@code file}
      * @param seed   the PRBS register's initial state (non-zero, at most {@code 2^n − 1}); 0 for other sources
      * @param value  the constant bit, or the first bit of the alternating pattern; 0 for other sources
      * @param file   the user bit file (text of {@code 0}/{@code 1}), relative to the specification; "" otherwise
@@ -109,9 +131,9 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
             Objects.requireNonNull(file, "file");
         }
 
-        /** The PRBS order {@code n} of {@code prbsN}, or 0 for other sources. */
-        public int prbsOrder() {
-            return source.startsWith("prbs") ? Integer.parseInt(source.substring(4)) : 0;
+        /** Whether the source is a PRBS (then {@link #seed} applies). */
+        public boolean isPrbs() {
+            return source.startsWith("prbs-");
         }
     }
 
@@ -152,17 +174,25 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
         c.put("name", constellation.name());
         c.put("labeling", constellation.labeling());
         c.put("normalization", constellation.normalization().tradeName());
+        c.put("phase-offset-degrees", constellation.phaseOffsetDegrees());
         putQuantizer(root.putObject("mapper"), mapper);
         ObjectNode d = root.putObject("demapper");
         putQuantizer(d.putObject("input"), demapper.input());
-        d.put("algorithm", demapper.algorithm());
-        d.put("reference", demapper.reference());
-        d.put("llr-scale", demapper.llrScale());
+        d.put("algorithm", demapper.algorithm().tradeName());
+        d.put("reference", demapper.reference().tradeName());
+        d.put("scaling", demapper.scaling().tradeName());
+        d.put("design-es-n0-db", demapper.designEsN0Db());
+        d.put("constant-rounding", demapper.constantRounding().tradeName());
+        putQuantizer(d.putObject("metric"), demapper.metric());
+        if (demapper.scaleConstant() != null) {
+            d.put("scale-constant", demapper.scaleConstant().toString());
+            putQuantizer(d.putObject("scale"), demapper.scale());
+        }
         putQuantizer(d.putObject("llr"), demapper.llr());
         d.put("llr-sign", demapper.llrSign().tradeName());
         ObjectNode b = root.putObject("bits");
         b.put("source", bits.source());
-        if (bits.prbsOrder() > 0) {
+        if (bits.isPrbs()) {
             b.put("seed", bits.seed());
         } else if (bits.source().equals("constant") || bits.source().equals("alternating")) {
             b.put("value", bits.value());

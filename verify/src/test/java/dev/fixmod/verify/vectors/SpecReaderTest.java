@@ -5,6 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.fixmod.constellation.Normalization;
+import dev.fixmod.demap.LlrScaling;
+import dev.fixmod.demap.LlrSign;
+import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Rounding;
@@ -20,7 +23,7 @@ class SpecReaderTest {
     void aShortSpecGetsEveryDefault() {
         VectorSpec s = SpecReader.parse("{\n  \"constellation\": \"qam64\"\n}\n", "s.json");
         assertEquals("qam64", s.name());
-        assertEquals("gray", s.constellation().labeling());
+        assertEquals("default", s.constellation().labeling());
         assertEquals(Normalization.UNIT_ENERGY, s.constellation().normalization());
         assertEquals(QFormat.parse("Q1.14"), s.mapper().format());
         assertEquals(QFormat.parse("Q2.9"), s.demapper().input().format());
@@ -28,7 +31,10 @@ class SpecReaderTest {
         assertEquals(Overflow.SYMMETRIC_SATURATE, s.demapper().llr().overflow());
         assertEquals(Rounding.HALF_EVEN, s.demapper().input().rounding());
         assertEquals(LlrSign.ZERO_POSITIVE, s.demapper().llrSign());
-        assertEquals("prbs23", s.bits().source());
+        assertEquals(SoftAlgorithm.MAX_LOG, s.demapper().algorithm());
+        assertEquals(SoftAlgorithm.MAX_LOG, s.demapper().reference());
+        assertEquals(LlrScaling.NOISE_SCALED, s.demapper().scaling());
+        assertEquals("prbs-23", s.bits().source());
         assertEquals((1L << 23) - 1, s.bits().seed());
         assertEquals(List.of(10.0, 20.0), s.noise().levelsDb());
         assertEquals(256, s.count());
@@ -45,7 +51,7 @@ class SpecReaderTest {
     void canonicalFormReadsBackToTheSameSpecAndIsAFixedPoint() {
         VectorSpec s = SpecReader.parse("{\"formats\":[\"npy\",\"hex\"],\"count\":7,\"constellation\":{\"name\":"
                 + "\"psk8\",\"labeling\":\"natural\"},\"noise\":{\"eb-n0-db\":[3.5],\"code-rate\":0.5,\"seed\":9},"
-                + "\"bits\":{\"source\":\"prbs9\",\"seed\":5},\"corner-cases\":[\"zero\",\"labels\"]}", "s.json");
+                + "\"bits\":{\"source\":\"prbs-9\",\"seed\":5},\"corner-cases\":[\"zero\",\"labels\"]}", "s.json");
         String canonical = s.toCanonicalJson().toString();
         VectorSpec again = SpecReader.parse(canonical, "manifest");
         assertEquals(s, again);
@@ -76,9 +82,9 @@ class SpecReaderTest {
             {"noise": {"es-n0-db": 10}}                                 | noise.es-n0-db: expected an array of numbers in dB
             {"noise": {"es-n0-db": [1], "eb-n0-db": [2]}}               | noise.eb-n0-db: give either es-n0-db or eb-n0-db, not both
             {"noise": {"code-rate": 0}}                                 | noise.code-rate: 0.0 is not a code rate; expected a number in (0, 1]
-            {"bits": {"source": "prbs8"}}                               | bits.source: unknown bit source 'prbs8'; expected one of prbs7
-            {"bits": {"source": "prbs7", "seed": 0}}                    | bits.seed: 0 is out of range; expected an integer from 1 to 127
-            {"bits": {"source": "prbs7", "value": 1}}                   | bits.value: unknown key "value"; expected one of source, seed
+            {"bits": {"source": "prbs-8"}}                              | bits.source: unknown bit source 'prbs-8'; expected one of prbs-7, prbs-9
+            {"bits": {"source": "prbs-7", "seed": 0}}                   | bits.seed: 0 is out of range; expected an integer from 1 to 127
+            {"bits": {"source": "prbs-7", "value": 1}}                  | bits.value: unknown key "value"; expected one of source, seed
             {"bits": {"source": "constant", "value": 2}}                | bits.value: 2 is out of range; expected an integer from 0 to 1
             {"bits": {"source": "file"}}                                | bits: source "file" needs the key "file"
             {"bits": true}                                              | bits: expected a JSON object {...}, got the boolean true
@@ -86,15 +92,20 @@ class SpecReaderTest {
             {"formats": "hex"}                                          | formats: expected an array of names from hex, csv, bin, c, npy, got the string "hex"
             {"corner-cases": ["zero", "zero"]}                          | corner-cases[1]: 'zero' is listed twice
             {"corner-cases": [null]}                                    | corner-cases[0]: expected a name from labels, thresholds, ties, extremes, zero, llr-limits, got null
-            {"demapper": {"algorithm": "log-map"}}                      | demapper.algorithm: unknown algorithm 'log-map'; expected one of max-log, max-log-per-axis, folded-linear
-            {"demapper": {"reference": "exact"}}                        | demapper.reference: unknown algorithm 'exact'; expected one of log-map, max-log
+            {"demapper": {"algorithm": "log-map"}}                      | demapper.algorithm: log-map has no fixed-point datapath; expected max-log, max-log-per-axis or folded-linear
+            {"demapper": {"reference": "exact"}}                        | demapper.reference: unknown soft demapping algorithm 'exact'; expected one of log-map, max-log
+            {"demapper": {"scaling": "unscaled", "scale": {}}}          | demapper.scale: an unscaled datapath has no scale
+            {"demapper": {"scaling": "linear"}}                         | demapper.scaling: unknown LLR scaling 'linear'; expected one of noise-scaled, unscaled
+            {"demapper": {"input": {"format": "Q20.10"}}}               | s.json:1:2: demapper: the metric of qam16 from input Q20.10 needs 42 integer bits, more than a 32-bit word holds
+            {"constellation": "psk8", "demapper": {"algorithm": "max-log-per-axis"}} | demapper: max-log-per-axis needs a separable constellation
             {"noise": {"seed": 4294967296}}                             | noise.seed: 4294967296 is out of range; expected an integer from 0 to 4294967295
             {"noise": {"gaussian": "polar"}}                            | noise.gaussian: unknown Gaussian sampler 'polar'; expected one of box-muller, ziggurat
-            {"demapper": {"llr-scale": -1}}                             | demapper.llr-scale: -1.0 is not a valid scale
-            {"demapper": {"llr-sign": "negative"}}                      | demapper.llr-sign: unknown name 'negative'; expected one of zero-positive, one-positive
-            {"constellation": {"name": "qam17"}}                        | s.json:1:20: constellation.name: square QAM order must be a power of two in 4..4096, got 17
+            {"demapper": {"llr-sign": "negative"}}                      | s.json:1:15: demapper.llr-sign: unknown LLR sign 'negative'; expected one of zero-positive, one-positive
+            {"constellation": {"name": "qam17"}}                        | s.json:1:20: constellation.name:
+            {"constellation": "nr:qam17"}                               | s.json:1:2: constellation:
             {"constellation": {"name": "qam16", "labeling": "spiral"}}  | constellation.labeling: unknown labeling 'spiral'
             {"constellation": {"normalization": "unit"}}                | constellation.normalization: unknown normalization 'unit'; expected one of none, unit-energy
+            {"constellation": {"name": "nr:qam16", "labeling": "gray"}} | constellation.labeling:
             {"schema": "other"}                                         | schema: 'other' is not this tool's schema
             {"version": 2}                                              | version: version 2 is not supported
             {"name": "a b"}                                             | name: 'a b' is not a set name
