@@ -6,6 +6,8 @@ import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Comparator;
 import java.util.stream.Stream;
 
@@ -54,6 +56,10 @@ public final class SetFolder {
         Path parent = absolute.getParent();
         Files.createDirectories(parent);
         Path temp = Files.createTempDirectory(parent, "." + absolute.getFileName() + ".tmp-");
+        // A temporary folder is private (rwx------); the finished set is an ordinary folder.
+        if (Files.getFileStore(temp).supportsFileAttributeView(PosixFileAttributeView.class)) {
+            Files.setPosixFilePermissions(temp, PosixFilePermissions.fromString("rwxr-xr-x"));
+        }
         Thread cleanup = new Thread(() -> deleteQuietly(temp), "fixmod-vectors-cleanup");
         Runtime.getRuntime().addShutdownHook(cleanup);
         try {
