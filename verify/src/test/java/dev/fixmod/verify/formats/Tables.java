@@ -35,6 +35,17 @@ final class Tables {
         }
     }
 
+    /** The same codes under a spec with comment lines (for the commented formats). */
+    Tables withComments() {
+        return new Tables(spec.withComments(java.util.List.of("fixmod test table " + spec.name(),
+                "fields " + spec.layout().describe())), codes);
+    }
+
+    private Tables(TableSpec spec, long[][] codes) {
+        this.spec = spec;
+        this.codes = codes;
+    }
+
     /** I and Q as Q3.8: a 24-bit word, I in bits 23..12. */
     static Tables iq(int rows) {
         return new Tables(TableSpec.of("tx", FieldLayout.of(Field.of("I", "Q3.8"), Field.of("Q", "Q3.8")), rows), 1);
