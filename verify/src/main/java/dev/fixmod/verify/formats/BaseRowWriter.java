@@ -27,28 +27,33 @@ abstract class BaseRowWriter implements RowWriter {
             throw new IllegalStateException("table " + table.name() + " declares " + table.rows()
                     + " rows; row " + (written + 1) + " is one too many");
         }
-        String where = "table " + table.name() + ", row " + written + " (index " + index + ")";
         if (index < 0) {
-            throw new IllegalArgumentException(where + ": the index must be >= 0");
+            throw new IllegalArgumentException(where(index) + ": the index must be >= 0");
         }
         int named = table.flagNames().size();
         if (named < 64 && (flags >>> named) != 0) {
-            throw new IllegalArgumentException(where + ": flag bits 0x" + Long.toHexString(flags >>> named << named)
-                    + " have no name (the table names " + named + " flag bits)");
+            throw new IllegalArgumentException(where(index) + ": flag bits 0x"
+                    + Long.toHexString(flags >>> named << named) + " have no name (the table names " + named
+                    + " flag bits)");
         }
         if (offset < 0 || offset > codes.length - layout.fieldCount()) {
-            throw new IllegalArgumentException(where + ": needs " + layout.fieldCount() + " codes at offset "
+            throw new IllegalArgumentException(where(index) + ": needs " + layout.fieldCount() + " codes at offset "
                     + offset + " of an array of length " + codes.length);
         }
         for (int i = 0; i < layout.fieldCount(); i++) {
             try {
                 layout.check(i, codes[offset + i]);
             } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException(where + ": " + e.getMessage(), e);
+                throw new IllegalArgumentException(where(index) + ": " + e.getMessage(), e);
             }
         }
         row(index, flags, codes, offset);
         written++;
+    }
+
+    /** Where a bad row is, for messages (built only on error, so good rows allocate nothing). */
+    private String where(long index) {
+        return "table " + table.name() + ", row " + written + " (index " + index + ")";
     }
 
     /** Writes one checked row. */
