@@ -16,9 +16,12 @@ final class Checks {
 
     /** Indices {@code first … first + length − 1} must lie in {@code 0 … limit}. */
     static void indices(String what, long first, int length, long limit) {
-        if (first < 0 || first > limit || length > 0 && first > limit - (length - 1)) {
-            throw new IllegalArgumentException(what + " indices " + first + " … " + first + " + " + length
-                    + " - 1 must lie in 0.." + limit);
+        if (first < 0 || first > limit) {
+            throw new IllegalArgumentException("first " + what + " index must be 0.." + limit + ", got " + first);
+        }
+        if (length > 0 && first > limit - (length - 1)) {
+            throw new IllegalArgumentException(length + " " + what + "s from index " + first
+                    + " would pass the largest index " + limit);
         }
     }
 }

@@ -154,8 +154,11 @@ class GaussianTest {
         assertEquals("unknown Gaussian method 'polar'; expected box-muller or ziggurat", e.getMessage());
         IllegalArgumentException idx = assertThrows(IllegalArgumentException.class,
                 () -> Gaussian.ZIGGURAT.fill(new double[3], 0, 3, StreamKey.of(0, 0), Long.MAX_VALUE - 1));
-        assertEquals("Gaussian sample indices 9223372036854775806 … 9223372036854775806 + 3 - 1 must lie in"
-                + " 0..9223372036854775807", idx.getMessage());
+        assertEquals("3 Gaussian samples from index 9223372036854775806 would pass the largest index"
+                + " 9223372036854775807", idx.getMessage());
+        assertEquals("first Gaussian sample index must be 0..9223372036854775807, got -1",
+                assertThrows(IllegalArgumentException.class, () -> Gaussian.BOX_MULLER.fill(new double[1], 0, 1,
+                        StreamKey.of(0, 0), -1)).getMessage());
         double[] last = new double[2];
         Gaussian.ZIGGURAT.fill(last, 0, 2, StreamKey.of(0, 0), Long.MAX_VALUE - 1);
         assertTrue(Double.isFinite(last[0]) && Double.isFinite(last[1]));
