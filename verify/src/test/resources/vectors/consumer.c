@@ -2,7 +2,7 @@
  * A C consumer of a fixmod vector set: includes the generated header of one port, reads the same port's raw
  * little-endian binary, checks that both hold the same values, and prints the SHA-256 of the header's values
  * serialized as little-endian integers (which must equal the manifest's SHA-256 of the .bin file).
- * Build: gcc -std=c99 -I<set> -DPORT_HEADER='"llr.h"' -DPORT_ARRAY=<id> -DPORT_COUNT=<ID>_COUNT
+ * Build: gcc -std=c99 -I<set> -DPORT_HEADER='"llr.h"' -DPORT_ARRAY=<id> -DPORT_COUNT=<ID>_ROWS
  *        -DPORT_FIELDS=<ID>_FIELDS consumer.c
  * SHA-256 as specified in FIPS 180-4, written for this test.
  */

@@ -92,12 +92,10 @@ public final class VectorsCommand implements Runnable {
                 try (ProgressBar pb = new ProgressBarBuilder().setTaskName("vectors").setInitialMax(generator.totalCount())
                         .setStyle(ProgressBarStyle.ASCII).setConsumer(
                                 new me.tongfei.progressbar.ConsoleProgressBarConsumer(System.err)).build()) {
-                    manifest = SetFolder.write(output, force, dir -> generator.writeInto(dir,
-                            new VectorSetGenerator.Options(threads, pb::stepTo)));
+                    manifest = generator.writeTo(output, force, new VectorSetGenerator.Options(threads, pb::stepTo));
                 }
             } else {
-                manifest = SetFolder.write(output, force, dir -> generator.writeInto(dir,
-                        new VectorSetGenerator.Options(threads, null)));
+                manifest = generator.writeTo(output, force, new VectorSetGenerator.Options(threads, null));
             }
             if (!quiet) {
                 PrintWriter out = cs.commandLine().getOut();

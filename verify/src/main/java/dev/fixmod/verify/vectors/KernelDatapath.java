@@ -21,7 +21,6 @@ import dev.fixmod.map.FixedMapper;
  * {@link SoftDemapper} as reference. Kernel objects with scratch state are held one per thread.
  */
 final class KernelDatapath implements Datapath {
-    private final VectorSpec spec;
     private final Constellation constellation;
     private final ConstellationRom rom;
     private final FixedMapper mapper;
@@ -38,7 +37,6 @@ final class KernelDatapath implements Datapath {
     private final long llrHigh;
 
     private KernelDatapath(VectorSpec spec) {
-        this.spec = spec;
         this.constellation = ConstellationResolver.resolve(spec.constellation());
         this.rom = ConstellationRom.of(constellation, spec.mapper());
         this.mapper = new FixedMapper(rom);

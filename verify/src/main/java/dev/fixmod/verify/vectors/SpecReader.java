@@ -25,6 +25,7 @@ import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.fixed.Rounding;
+import dev.fixmod.verify.formats.FileFormat;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.EnumSet;
@@ -128,9 +129,9 @@ public final class SpecReader {
         string(top, "", "description", "");
         VectorSpec.ConstellationChoice constellation = constellation(top);
         String name = string(top, "", "name", constellation.name().replace(':', '-'));
-        if (!name.matches("[A-Za-z][A-Za-z0-9_-]{0,63}")) {
-            throw error("/name", "'" + name + "' is not a set name; expected a letter then up to 63 letters, digits,"
-                    + " '_' or '-' (it becomes part of file names and C identifiers)");
+        if (!name.matches("[A-Za-z][A-Za-z0-9_-]{0,39}")) {
+            throw error("/name", "'" + name + "' is not a set name; expected a letter then up to 39 letters, digits,"
+                    + " '_' or '-' (it becomes part of C and VHDL identifiers)");
         }
         Quantizer mapper = quantizer(top, "", "mapper", "Q1.14", Rounding.HALF_EVEN, Overflow.SATURATE);
         VectorSpec.BitSource bits = bits(top);
@@ -138,7 +139,7 @@ public final class SpecReader {
         VectorSpec.Demapper demapper = demapper(top, noise);
         long count = integer(top, "", "count", 256, 0, MAX_COUNT);
         Set<CornerGroup> corners = nameSet(top, "", "corner-cases", CornerGroup.class);
-        Set<OutputFormat> formats = nameSet(top, "", "formats", OutputFormat.class);
+        Set<FileFormat> formats = formats(top);
         return new VectorSpec(name, constellation, mapper, demapper, bits, noise, count, corners, formats);
     }
 
@@ -194,8 +195,13 @@ public final class SpecReader {
         LlrSign sign = named(d, p, "llr-sign", LlrSign.ZERO_POSITIVE.tradeName(), LlrSign::fromName);
         Quantizer llr = quantizer(d, p, "llr", "Q5.0", Rounding.HALF_EVEN, Overflow.SYMMETRIC_SATURATE);
         QFormat outputFormat = llr.format();
-        // The suggested stages are sized for the largest K the set uses (the smallest N0 of any level).
         int k = resolved.bitsPerSymbol();
+        if (k * outputFormat.wordLength() > 64) {
+            throw error(d.has("llr") ? p + "/llr/format" : p + "/llr", k + " LLRs of " + outputFormat.wordLength()
+                    + " bits make a " + k * outputFormat.wordLength() + "-bit word; the LLR port holds at most 64"
+                    + " bits, so use at most " + 64 / k + "-bit LLRs for " + resolved.name());
+        }
+        // The suggested stages are sized for the largest K the set uses (the smallest N0 of any level).
         double esN0 = design;
         for (int l = 0; l < noise.levelsDb().size(); l++) {
             esN0 = Math.max(esN0, noise.esN0Db(l, k));
@@ -373,6 +379,40 @@ public final class SpecReader {
             throw error(p + "/overflow", e.getMessage());
         }
         return new Quantizer(f, r, o);
+    }
+
+    /** The default formats: one of each kind a testbench reads (the commented and packed variants on request). */
+    static final Set<FileFormat> DEFAULT_FORMATS = EnumSet.of(FileFormat.HEX, FileFormat.CSV, FileFormat.BINARY,
+            FileFormat.C_HEADER, FileFormat.NPY);
+
+    private Set<FileFormat> formats(ObjectNode top) {
+        String p = "/formats";
+        JsonNode arr = top.get("formats");
+        String accepted = java.util.Arrays.stream(FileFormat.values()).map(FileFormat::label)
+                .collect(java.util.stream.Collectors.joining(", "));
+        if (arr == null) {
+            return DEFAULT_FORMATS;
+        }
+        if (!arr.isArray()) {
+            throw error(p, "expected an array of names from " + accepted + ", got " + kind(arr));
+        }
+        EnumSet<FileFormat> set = EnumSet.noneOf(FileFormat.class);
+        for (int i = 0; i < arr.size(); i++) {
+            JsonNode e = arr.get(i);
+            if (!e.isTextual()) {
+                throw error(p + "/" + i, "expected a name from " + accepted + ", got " + kind(e));
+            }
+            FileFormat f;
+            try {
+                f = FileFormat.fromName(e.asText());
+            } catch (IllegalArgumentException x) {
+                throw error(p + "/" + i, "unknown format '" + e.asText() + "'; expected one of " + accepted);
+            }
+            if (!set.add(f)) {
+                throw error(p + "/" + i, "'" + e.asText() + "' is listed twice");
+            }
+        }
+        return set;
     }
 
     private <E extends Enum<E> & TradeNamed> Set<E> nameSet(ObjectNode parent, String parentPath, String key,

@@ -60,9 +60,10 @@ public final class VectorSetChecker {
         }
         VectorSpec spec = SpecReader.parse(manifest.spec().toString(), manifestFile + ": spec");
         groupCounts(manifest, problems);
-        Path temp = Files.createTempDirectory("fixmod-check-");
+        Path work = Files.createTempDirectory("fixmod-check-");
+        Path temp = work.resolve("regenerated");
         try {
-            VectorSetGenerator.of(spec, dir).writeInto(temp, VectorSetGenerator.Options.single());
+            VectorSetGenerator.of(spec, dir).writeTo(temp, false, VectorSetGenerator.Options.single());
             Set<String> regenerated = new TreeSet<>();
             try (Stream<Path> s = Files.list(temp)) {
                 s.forEach(p -> regenerated.add(p.getFileName().toString()));
@@ -84,7 +85,7 @@ public final class VectorSetChecker {
                 }
             }
         } finally {
-            SetFolder.deleteQuietly(temp);
+            SetFolder.deleteQuietly(work);
         }
         return problems;
     }
@@ -112,11 +113,11 @@ public final class VectorSetChecker {
         }
         int fields = layout.path("fields").size();
         int digits = layout.path("hex-digits").asInt();
-        String container = layout.path("container").asText();
+        String container = layout.path("storage").asText();
         int bytes = container.endsWith("8_t") ? 1 : container.endsWith("16_t") ? 2 : 4;
         long size = Files.size(f);
         switch (e.format()) {
-            case "bin" -> {
+            case "binary" -> {
                 if (size != e.count() * fields * bytes) {
                     problems.add(e.name() + ": " + size + " bytes, but " + e.count() + " vectors of " + fields + " "
                             + container + " need " + e.count() * fields * bytes);
@@ -172,7 +173,12 @@ public final class VectorSetChecker {
     }
 
     static String sha256(Path f) throws IOException {
-        MessageDigest md = SetFiles.sha256();
+        MessageDigest md;
+        try {
+            md = MessageDigest.getInstance("SHA-256");
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("the JDK always provides SHA-256", e);
+        }
         try (InputStream in = new DigestInputStream(Files.newInputStream(f), md)) {
             in.transferTo(java.io.OutputStream.nullOutputStream());
         }

@@ -12,6 +12,9 @@ import dev.fixmod.verify.noise.Gaussian;
 import dev.fixmod.verify.noise.NoiseSpec;
 import dev.fixmod.verify.noise.StreamKey;
 import java.io.IOException;
+import dev.fixmod.verify.formats.OutputSet;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayDeque;
@@ -109,16 +112,29 @@ public final class VectorSetGenerator {
      * Writes every file of the set into {@code dir} (an existing, empty folder) and returns the manifest, which is
      * written there too.
      */
-    public Manifest writeInto(Path dir, Options options) throws IOException {
-        SetFiles files = new SetFiles(spec, datapath, dir, mapperCount(), demapperCount());
+    public Manifest writeTo(Path target, boolean force, Options options) throws IOException {
+        SetFolder.requireWritable(target, force);
+        try (OutputSet set = OutputSet.create(target, force)) {
+            Manifest manifest = writeInto(set, options);
+            set.commit();
+            return manifest;
+        }
+    }
+
+    /** Writes every file of the set into {@code set} (not committed) and returns the manifest, written there too. */
+    Manifest writeInto(OutputSet set, Options options) throws IOException {
+        SetFiles files = new SetFiles(spec, k, set, mapperCount(), demapperCount());
         ObjectNode bitFile = null;
         VectorSpec recorded = spec;
         if (spec.bits().source().equals("file")) {
             // The set carries its own copy of the bits, so the manifest alone regenerates it.
-            byte[] bytes = Files.readAllBytes(specDir.resolve(spec.bits().file()));
-            Files.write(dir.resolve(BIT_FILE_COPY), bytes);
-            long bits = LabelStream.readBitFile(dir.resolve(BIT_FILE_COPY), BIT_FILE_COPY).length;
-            bitFile = SetFiles.entry(BIT_FILE_COPY, "bits-source", "text", bits, SetFiles.sha256().digest(bytes), null);
+            Path source = specDir.resolve(spec.bits().file());
+            byte[] bytes = Files.readAllBytes(source);
+            try (OutputStream out = set.newFile(BIT_FILE_COPY)) {
+                out.write(bytes);
+            }
+            long bits = LabelStream.readBitFile(source, spec.bits().file()).length;
+            bitFile = SetFiles.entry(BIT_FILE_COPY, "bits-source", "text", bits, set.sha256(BIT_FILE_COPY), null);
             recorded = new VectorSpec(spec.name(), spec.constellation(), spec.mapper(), spec.demapper(),
                     new VectorSpec.BitSource("file", 0, 0, BIT_FILE_COPY), spec.noise(), spec.count(),
                     spec.cornerCases(), spec.formats());
@@ -153,11 +169,14 @@ public final class VectorSetGenerator {
             }
         }
         List<ObjectNode> entries = files.finish();
+        RomExport.write(spec, datapath, set, entries);
         if (bitFile != null) {
             entries.add(bitFile);
         }
         Manifest manifest = Manifest.of(manifestJson(recorded, entries, overflows));
-        SetFiles.writeText(dir.resolve(Manifest.FILE_NAME), manifest.text());
+        try (OutputStream out = set.newFile(Manifest.FILE_NAME)) {
+            out.write(manifest.text().getBytes(StandardCharsets.UTF_8));
+        }
         return manifest;
     }
 

@@ -11,6 +11,7 @@ import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.fixed.Rounding;
+import dev.fixmod.verify.formats.FileFormat;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Objects;
@@ -32,7 +33,7 @@ import java.util.Set;
  * @param formats       the file formats written (iteration order is the enum's)
  */
 public record VectorSpec(String name, ConstellationChoice constellation, Quantizer mapper, Demapper demapper,
-        BitSource bits, Noise noise, long count, Set<CornerGroup> cornerCases, Set<OutputFormat> formats) {
+        BitSource bits, Noise noise, long count, Set<CornerGroup> cornerCases, Set<FileFormat> formats) {
 
     /** The schema name of specification files. */
     public static final String SCHEMA = "fixmod-vector-spec";
@@ -59,7 +60,7 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
     }
 
     /** Whether the file format is written. */
-    public boolean writes(OutputFormat format) {
+    public boolean writes(FileFormat format) {
         return formats.contains(format);
     }
 
@@ -209,7 +210,7 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
         ArrayNode corners = root.putArray("corner-cases");
         EnumSet.allOf(CornerGroup.class).stream().filter(cornerCases::contains).forEach(g -> corners.add(g.tradeName()));
         ArrayNode fmts = root.putArray("formats");
-        EnumSet.allOf(OutputFormat.class).stream().filter(formats::contains).forEach(o -> fmts.add(o.tradeName()));
+        EnumSet.allOf(FileFormat.class).stream().filter(formats::contains).forEach(o -> fmts.add(o.label()));
         return root;
     }
 

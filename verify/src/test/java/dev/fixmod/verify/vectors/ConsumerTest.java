@@ -28,8 +28,7 @@ class ConsumerTest {
         VectorSpec spec = SpecReader.parse("{\"name\": \"c64\", \"constellation\": \"nr:qam64\", \"count\": 200,"
                 + " \"demapper\": {\"input\": {\"format\": \"Q3.12\"}}, \"noise\": {\"es-n0-db\": [15]}}", "c.json");
         set = temp.resolve("c64");
-        manifest = SetFolder.write(set, false, d -> VectorSetGenerator.of(spec, temp).writeInto(d,
-                VectorSetGenerator.Options.single()));
+        manifest = VectorSetGenerator.of(spec, temp).writeTo(set, false, VectorSetGenerator.Options.single());
     }
 
     static Manifest.Entry entry(String name) {
@@ -61,7 +60,7 @@ class ConsumerTest {
         Path exe = temp.resolve("consumer-" + port);
         ExternalProgram.runOk(temp, 120, gcc.toString(), "-std=c99", "-Wall", "-Wextra", "-Werror", "-O1",
                 "-I" + set, "-DPORT_HEADER=\"" + port + ".h\"", "-DPORT_ARRAY=" + id,
-                "-DPORT_COUNT=" + id.toUpperCase() + "_COUNT", "-DPORT_FIELDS=" + id.toUpperCase() + "_FIELDS",
+                "-DPORT_COUNT=" + id.toUpperCase() + "_ROWS", "-DPORT_FIELDS=" + id.toUpperCase() + "_FIELDS",
                 "-o", exe.toString(), src.toString());
         String out = ExternalProgram.runOk(temp, 60, exe.toString(), set.resolve(port + ".bin").toString());
         // The C side serializes the header's values as little-endian integers and hashes them (FIPS 180-4): the

@@ -11,6 +11,7 @@ import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Rounding;
+import dev.fixmod.verify.formats.FileFormat;
 import java.util.EnumSet;
 import java.util.List;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -39,7 +40,8 @@ class SpecReaderTest {
         assertEquals(List.of(10.0, 20.0), s.noise().levelsDb());
         assertEquals(256, s.count());
         assertEquals(EnumSet.allOf(CornerGroup.class), s.cornerCases());
-        assertEquals(EnumSet.allOf(OutputFormat.class), s.formats());
+        assertEquals(EnumSet.of(FileFormat.HEX, FileFormat.CSV, FileFormat.BINARY, FileFormat.C_HEADER, FileFormat.NPY),
+                s.formats());
     }
 
     @Test
@@ -88,8 +90,8 @@ class SpecReaderTest {
             {"bits": {"source": "constant", "value": 2}}                | bits.value: 2 is out of range; expected an integer from 0 to 1
             {"bits": {"source": "file"}}                                | bits: source "file" needs the key "file"
             {"bits": true}                                              | bits: expected a JSON object {...}, got the boolean true
-            {"formats": ["hex", "vcd"]}                                 | s.json:1:21: formats[1]: unknown name 'vcd'; expected one of hex, csv, bin, c, npy
-            {"formats": "hex"}                                          | formats: expected an array of names from hex, csv, bin, c, npy, got the string "hex"
+            {"formats": ["hex", "vcd"]}                                 | s.json:1:21: formats[1]: unknown format 'vcd'; expected one of hex, hex-commented, csv, binary, packed-binary, c-header, npy
+            {"formats": "hex"}                                          | formats: expected an array of names from hex, hex-commented, csv, binary, packed-binary, c-header, npy, got the string "hex"
             {"corner-cases": ["zero", "zero"]}                          | corner-cases[1]: 'zero' is listed twice
             {"corner-cases": [null]}                                    | corner-cases[0]: expected a name from labels, thresholds, ties, extremes, zero, llr-limits, got null
             {"demapper": {"algorithm": "log-map"}}                      | demapper.algorithm: log-map has no fixed-point datapath; expected max-log, max-log-per-axis or folded-linear
@@ -109,6 +111,7 @@ class SpecReaderTest {
             {"schema": "other"}                                         | schema: 'other' is not this tool's schema
             {"version": 2}                                              | version: version 2 is not supported
             {"name": "a b"}                                             | name: 'a b' is not a set name
+            {"constellation": "wlan:qam1024", "demapper": {"llr": {"format": "Q6.0"}}} | demapper.llr.format: 10 LLRs of 7 bits make a 70-bit word; the LLR port holds at most 64 bits, so use at most 6-bit LLRs
             [1, 2]                                                      | s.json:1:1: (top level): expected a JSON object {...}, got an array
             {"count": 1} x                                              | s.json:1:15: not valid JSON: Unrecognized token 'x'
             {"count": 1                                                 | not valid JSON: Unexpected end-of-input

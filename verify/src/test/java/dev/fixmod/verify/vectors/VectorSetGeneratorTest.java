@@ -41,8 +41,7 @@ class VectorSetGeneratorTest {
     static void generate() throws IOException {
         spec = SpecReader.parse(SPEC, "t.json");
         set = temp.resolve("t16");
-        manifest = SetFolder.write(set, false, dir -> VectorSetGenerator.of(spec, temp).writeInto(dir,
-                VectorSetGenerator.Options.single()));
+        manifest = VectorSetGenerator.of(spec, temp).writeTo(set, false, VectorSetGenerator.Options.single());
         datapath = KernelDatapath.of(spec);
     }
 
@@ -63,8 +62,15 @@ class VectorSetGeneratorTest {
         return rows;
     }
 
+    /** The flags word of a CSV row, whose flags column lists the names joined by '|'. */
     static int flags(Map<String, String> row) {
-        return Integer.parseInt(row.get("flags"));
+        int word = 0;
+        for (String name : row.get("flags").split("\\|")) {
+            for (CornerFlag f : CornerFlag.values()) {
+                word |= f.tradeName().equals(name) ? f.mask() : 0;
+            }
+        }
+        return word;
     }
 
     @Test
@@ -118,11 +124,11 @@ class VectorSetGeneratorTest {
         for (int label = 0; label < 16; label++) {
             Map<String, String> row = mapped.get(300 + label);
             assertEquals(CornerFlag.LABEL_SWEEP.mask(), flags(row));
-            assertEquals(datapath.romI(label), Long.parseLong(row.get("i")));
-            assertEquals(datapath.romQ(label), Long.parseLong(row.get("q")));
+            assertEquals(datapath.romI(label), Long.parseLong(row.get("I")));
+            assertEquals(datapath.romQ(label), Long.parseLong(row.get("Q")));
         }
         List<Map<String, String>> hard = csv("hard.csv");
-        List<Map<String, String>> in = csv("demapper-in.csv");
+        List<Map<String, String>> in = csv("reference.csv");
         int sweep = 2 * 300;
         for (int label = 0; label < 16; label++) {
             assertEquals(CornerFlag.LABEL_SWEEP.mask(), flags(in.get(sweep + label)) & CornerFlag.LABEL_SWEEP.mask());
@@ -136,7 +142,7 @@ class VectorSetGeneratorTest {
         // Level 1 is E_s/N0 = 30 dB: for 16-QAM (d_min = 2/sqrt(10) at unit energy) a noise sample beyond half the
         // minimum distance is a > 10-sigma event (handbook Q function; common practice, no source). With the
         // zero-positive convention a positive LLR means bit 0.
-        List<Map<String, String>> in = csv("demapper-in.csv");
+        List<Map<String, String>> in = csv("reference.csv");
         List<Map<String, String>> hard = csv("hard.csv");
         List<Map<String, String>> llr = csv("llr.csv");
         for (int n = 300; n < 600; n++) {
@@ -153,14 +159,14 @@ class VectorSetGeneratorTest {
 
     @Test
     void noiseLevelBlocksShareSymbolsAndDifferInNoise() throws IOException {
-        List<Map<String, String>> in = csv("demapper-in.csv");
+        List<Map<String, String>> in = csv("reference.csv");
         for (int n = 0; n < 300; n++) {
             assertEquals(in.get(n).get("sent_label"), in.get(300 + n).get("sent_label"));
             assertEquals(CornerFlag.NOISY.mask(), flags(in.get(n)) & CornerFlag.NOISY.mask());
         }
         long differ = 0;
         for (int n = 0; n < 300; n++) {
-            differ += in.get(n).get("channel_i").equals(in.get(300 + n).get("channel_i")) ? 0 : 1;
+            differ += in.get(n).get("channel_I").equals(in.get(300 + n).get("channel_I")) ? 0 : 1;
         }
         assertEquals(300, differ);
     }
@@ -168,6 +174,7 @@ class VectorSetGeneratorTest {
     @Test
     void cornerInputsCarryTheirFlagsAndFollowTheTieRule() throws IOException {
         List<Map<String, String>> in = csv("demapper-in.csv");
+        List<Map<String, String>> ref = csv("reference.csv");
         List<Map<String, String>> hard = csv("hard.csv");
         long[] ti = datapath.thresholdsI();
         long[] ri = datapath.referenceI();
@@ -180,10 +187,11 @@ class VectorSetGeneratorTest {
         for (int n = 616; n < in.size(); n++) {
             Map<String, String> row = in.get(n);
             int f = flags(row);
-            long i = Long.parseLong(row.get("i"));
-            long q = Long.parseLong(row.get("q"));
+            long i = Long.parseLong(row.get("I"));
+            long q = Long.parseLong(row.get("Q"));
             int decided = Integer.parseInt(hard.get(n).get("label"));
-            assertEquals("-1", row.get("sent_label"));
+            assertEquals("-1", ref.get(n).get("sent_label"));
+            assertEquals(f, flags(ref.get(n)));
             if ((f & CornerFlag.ON_THRESHOLD.mask()) != 0 && contains(ti, i)) {
                 // Per-axis tie rule of the slicer: x >= threshold takes the upper level.
                 assertTrue(ri[decided] >= i, "threshold " + i + " decided " + decided);
@@ -315,14 +323,12 @@ class VectorSetGeneratorTest {
     @Test
     void oneAndTwoThreadsAndSeveralChunksGiveIdenticalFiles(@TempDir Path dir) throws IOException {
         // count > 2 chunks so that chunk boundaries and the parallel window are exercised
-        VectorSpec s = SpecReader.parse("{\"constellation\": \"qam64\", \"count\": 9000, \"formats\": [\"bin\", \"csv\"],"
+        VectorSpec s = SpecReader.parse("{\"constellation\": \"qam64\", \"count\": 9000, \"formats\": [\"binary\", \"csv\"],"
                 + " \"noise\": {\"es-n0-db\": [12]}}", "d.json");
         Path one = dir.resolve("one");
         Path two = dir.resolve("two");
-        Manifest a = SetFolder.write(one, false, d -> VectorSetGenerator.of(s, dir).writeInto(d,
-                new VectorSetGenerator.Options(1, null)));
-        Manifest b = SetFolder.write(two, false, d -> VectorSetGenerator.of(s, dir).writeInto(d,
-                new VectorSetGenerator.Options(2, null)));
+        Manifest a = VectorSetGenerator.of(s, dir).writeTo(one, false, new VectorSetGenerator.Options(1, null));
+        Manifest b = VectorSetGenerator.of(s, dir).writeTo(two, false, new VectorSetGenerator.Options(2, null));
         assertEquals(a.text(), b.text());
         for (Manifest.Entry e : a.files()) {
             assertEquals(-1L, Files.mismatch(one.resolve(e.name()), two.resolve(e.name())), e.name());
