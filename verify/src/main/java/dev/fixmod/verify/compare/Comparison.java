@@ -329,7 +329,8 @@ public final class Comparison {
                     }
                     long min = field.format().minCode();
                     long max = field.format().maxCode();
-                    if (ec != min && ec != max && ac != min && ac != max) {
+                    // -max is the lower limit of symmetric saturation.
+                    if (ec != min && ec != max && ec != -max && ac != min && ac != max && ac != -max) {
                         atLimit = false;
                     }
                 }

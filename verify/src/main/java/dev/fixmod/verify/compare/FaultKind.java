@@ -1,5 +1,7 @@
 package dev.fixmod.verify.compare;
 
+import com.fasterxml.jackson.annotation.JsonValue;
+
 /** The kinds of fault a comparison recognizes and names in its diagnoses. */
 public enum FaultKind {
     /** Isolated words that differ from the golden word in exactly one bit. */
@@ -33,6 +35,7 @@ public enum FaultKind {
         this.tradeName = tradeName;
     }
 
+    @JsonValue
     public String tradeName() {
         return tradeName;
     }

@@ -1,17 +1,23 @@
 package dev.fixmod.verify.compare;
 
+import java.io.Closeable;
 import java.util.List;
 
 /**
  * The corner-case flags of each golden vector, asked for in increasing index order so that an implementation can
  * stream them from a file. A vector's flags are a bit set over {@link #names()} (bit i = names().get(i)).
  */
-public interface VectorFlags {
+public interface VectorFlags extends Closeable {
     /** The flag glossary, at most 64 names. */
     List<String> names();
 
     /** The flags of vector {@code index}; called with non-decreasing indices. */
     long flagsOf(long index);
+
+    /** Releases the file behind the flags, if any. */
+    @Override
+    default void close() {
+    }
 
     /** No vector carries a flag. */
     VectorFlags NONE = new VectorFlags() {
