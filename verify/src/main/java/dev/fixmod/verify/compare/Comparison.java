@@ -388,6 +388,9 @@ public final class Comparison {
         }
         List<FlagStats> flagStats = new ArrayList<>();
         for (int f = 0; f < flagNames.size(); f++) {
+            if (flagNames.get(f) == null) {
+                continue;
+            }
             flagStats.add(new FlagStats(flagNames.get(f), flagCompared[f], flagMismatched[f]));
         }
         return new CompareReport(golden.source(), dut.source(), port, layout.toString(), alignment, goldenWords,
@@ -546,7 +549,7 @@ public final class Comparison {
     private static List<String> flagList(long bits, List<String> names) {
         List<String> out = new ArrayList<>();
         for (int f = 0; f < names.size(); f++) {
-            if ((bits >>> f & 1) != 0) {
+            if ((bits >>> f & 1) != 0 && names.get(f) != null) {
                 out.add(names.get(f));
             }
         }

@@ -113,11 +113,11 @@ public final class GoldenSet {
                 throw new IllegalArgumentException(manifest + ": flags: bit " + flag.path("bit") + " is not 0..63");
             }
             while (names.size() <= bit) {
-                names.add("bit-" + names.size());
+                names.add(null); // a bit the glossary does not name; no flag of that name can be selected
             }
             names.set(bit, flag.path("name").asText());
         }
-        return List.copyOf(names);
+        return java.util.Collections.unmodifiableList(names);
     }
 
     /** Reads a layout given as "name:Qm.n,..." or as an array of {name, format} objects, most significant first. */
@@ -177,7 +177,7 @@ public final class GoldenSet {
         return p;
     }
 
-    /** Streams the {@code flags} column (a decimal or 0x-hex flags word per row) of a port's CSV file. */
+    /** Streams the {@code flags} column of a port's CSV file: flag names joined by '|', or a flags word. */
     private static final class CsvFlags implements VectorFlags {
         private final Path csv;
         private final List<String> names;
@@ -223,18 +223,38 @@ public final class GoldenSet {
                     row++;
                     String[] cells = line.split(",", -1);
                     String cell = column < cells.length ? cells[column].trim() : "";
-                    try {
-                        current = cell.startsWith("0x") ? Long.parseUnsignedLong(cell.substring(2), 16)
-                                : Long.parseLong(cell);
-                    } catch (NumberFormatException e) {
-                        throw new DumpFormatException(csv + ":" + lineNo + ": flags '" + cell
-                                + "' is not an integer flags word");
-                    }
+                    current = parseFlags(cell);
                 }
                 return current;
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
+        }
+
+        /** A cell is flag names joined by '|' (empty: none), or a flags word in decimal or 0x-hex. */
+        private long parseFlags(String cell) {
+            if (cell.isEmpty()) {
+                return 0;
+            }
+            char c = cell.charAt(0);
+            if (c >= '0' && c <= '9') {
+                try {
+                    return cell.startsWith("0x") ? Long.parseUnsignedLong(cell.substring(2), 16) : Long.parseLong(cell);
+                } catch (NumberFormatException e) {
+                    throw new DumpFormatException(csv + ":" + lineNo + ": flags '" + cell
+                            + "' is neither a flags word nor flag names joined by '|'");
+                }
+            }
+            long bits = 0;
+            for (String name : cell.split("\\|", -1)) {
+                int bit = names.indexOf(name.trim());
+                if (bit < 0) {
+                    throw new DumpFormatException(csv + ":" + lineNo + ": flag '" + name
+                            + "' is not in the manifest's glossary");
+                }
+                bits |= 1L << bit;
+            }
+            return bits;
         }
 
         @Override

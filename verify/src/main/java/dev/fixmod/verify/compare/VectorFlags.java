@@ -8,7 +8,7 @@ import java.util.List;
  * stream them from a file. A vector's flags are a bit set over {@link #names()} (bit i = names().get(i)).
  */
 public interface VectorFlags extends Closeable {
-    /** The flag glossary, at most 64 names. */
+    /** The flag glossary, at most 64 names; a null entry is a bit without a name. */
     List<String> names();
 
     /** The flags of vector {@code index}; called with non-decreasing indices. */
@@ -39,7 +39,8 @@ public interface VectorFlags extends Closeable {
             int i = names().indexOf(w);
             if (i < 0) {
                 throw new IllegalArgumentException("unknown corner-case flag '" + w + "'; this set's flags are "
-                        + (names().isEmpty() ? "(none)" : String.join(", ", names())));
+                        + (names().stream().allMatch(java.util.Objects::isNull) ? "(none)"
+                        : String.join(", ", names().stream().filter(java.util.Objects::nonNull).toList())));
             }
             mask |= 1L << i;
         }

@@ -53,6 +53,15 @@ class GoldenSetTest {
     }
 
     @Test
+    void theSetsOwnCsvReadsAsACsvDump() throws Exception {
+        Path a = HdlGoldenSet.write(dir.resolve("a"));
+        HdlProofTest.Result r = HdlProofTest.compare(a.toString(), "--port", "llr", "--dut",
+                a.resolve("llr.csv").toString(), "--dut-format", "csv", "--quiet");
+        assertEquals(0, r.status(), r.out() + r.err());
+        assertTrue(r.out().startsWith("AGREE"), r.out());
+    }
+
+    @Test
     void aModifiedGoldenFileIsRefused() throws Exception {
         Path a = HdlGoldenSet.write(dir.resolve("a"));
         Files.writeString(a.resolve("llr.hex"), "000000\n", StandardCharsets.US_ASCII,

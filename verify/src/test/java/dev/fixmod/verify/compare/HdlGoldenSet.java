@@ -12,7 +12,7 @@ import java.nio.file.Path;
 /**
  * Writes the golden set the HDL proof compares against, from {@link NrQam16LlrModel}: a folder with manifest.json
  * (files with port, format, layout, count, SHA-256; a flags glossary), the stimulus hex file, the expected LLR hex
- * file and a CSV with each vector's flags word. Flag names and bits follow the vector sets' glossary.
+ * file and a CSV with each vector's flags and LLR codes. Flag names and bits follow the vector sets' glossary.
  */
 final class HdlGoldenSet {
     static final int ON_THRESHOLD = 2;
@@ -45,6 +45,22 @@ final class HdlGoldenSet {
         return f;
     }
 
+    /** Flag names joined by '|', as the vector sets' CSV files write them. */
+    static String flagNames(long flags) {
+        StringBuilder b = new StringBuilder();
+        String[] names = new String[64];
+        names[ON_THRESHOLD] = "on-threshold";
+        names[ZERO] = "zero";
+        names[LLR_AT_MIN] = "llr-at-min";
+        names[LLR_AT_MAX] = "llr-at-max";
+        for (int bit = 0; bit < 64; bit++) {
+            if ((flags >>> bit & 1) != 0) {
+                b.append(b.length() == 0 ? "" : "|").append(names[bit]);
+            }
+        }
+        return b.toString();
+    }
+
     /** Writes the set into {@code folder} (created) and returns it. */
     static Path write(Path folder) throws IOException {
         Files.createDirectories(folder);
@@ -52,12 +68,16 @@ final class HdlGoldenSet {
         NrQam16LlrModel model = NrQam16LlrModel.golden();
         StringBuilder in = new StringBuilder("// demapper-in: i:Q1.6,q:Q1.6, one word per vector\n");
         StringBuilder out = new StringBuilder("// llr: llr0:Q5.0,llr1:Q5.0,llr2:Q5.0,llr3:Q5.0, one word per vector\n");
-        StringBuilder csv = new StringBuilder("index,flags\n");
+        StringBuilder csv = new StringBuilder("index,flags,llr0,llr1,llr2,llr3\n");
         for (int n = 0; n < stim.length; n++) {
             long llr = model.llrWord(stim[n]);
             in.append(NrQam16LlrModel.IN_LAYOUT.hex(stim[n])).append('\n');
             out.append(NrQam16LlrModel.LLR_LAYOUT.hex(llr)).append('\n');
-            csv.append(n).append(',').append(flags(stim[n], llr)).append('\n');
+            csv.append(n).append(',').append(flagNames(flags(stim[n], llr)));
+            for (WordLayout.Field f : NrQam16LlrModel.LLR_LAYOUT.fields()) {
+                csv.append(',').append(f.extract(llr));
+            }
+            csv.append('\n');
         }
         Files.writeString(folder.resolve("demapper-in.hex"), in, StandardCharsets.US_ASCII);
         Files.writeString(folder.resolve("llr.hex"), out, StandardCharsets.US_ASCII);
