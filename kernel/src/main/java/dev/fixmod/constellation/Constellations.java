@@ -144,8 +144,9 @@ public final class Constellations {
      * with |I| = 3L/2 + 1 + 2c and |Q| = 1 + 2r moves to |I| = 1 + 2r, |Q| = L + 1 + 2c in the same quadrant, i.e.
      * its distance from the cross's edge and its distance from the axis swap roles.
      *
-     * <p>With {@code quasi-gray} (per-axis Gray on the rectangle) every nearest pair inside the central band or
-     * inside one arm differs in exactly one bit; only the pairs across an arm's base differ in more. Measured Gray
+     * <p>With {@code quasi-gray} (per-axis Gray on the rectangle) every nearest pair inside the central band
+     * |Q| ≤ L − 1 (which holds the left and right arms) or inside the top or bottom arm differs in exactly one bit;
+     * only the 2L pairs across the bases of the top and bottom arms differ in more. Measured Gray
      * penalty (average Hamming distance over nearest-neighbour pairs, {@link Metrics#grayPenalty}):
      *
      * <table class="striped">
