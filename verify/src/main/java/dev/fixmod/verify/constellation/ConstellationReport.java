@@ -1,12 +1,12 @@
 package dev.fixmod.verify.constellation;
 
+import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.io.NumberOutput;
 import com.fasterxml.jackson.core.json.JsonWriteFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.core.JsonFactory;
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Metrics;
