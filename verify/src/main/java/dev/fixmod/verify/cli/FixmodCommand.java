@@ -12,7 +12,8 @@ import picocli.CommandLine.Command;
                 + " and quantization-loss reports.",
         subcommands = {
                 CommandLine.HelpCommand.class,
-                CompareCommand.class
+                ConstellationCommand.class,
+                CompareCommand.class,
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
                 "Results are engineering models, not conformance certification; the governing standard's text decides."})
