@@ -132,8 +132,8 @@ public final class LlrHistogram {
 
     /**
      * The scale s in [referenceScale·1e−4, referenceScale·1e4] that maximizes {@link #gmi(double)}; the GMI there
-     * is {@code gmi(bestScale(referenceScale))}. If the LLRs are never wrong, the GMI keeps rising with s and the
-     * upper end of the range comes back.
+     * is {@code gmi(bestScale(referenceScale))}. If the LLRs are never wrong, the GMI keeps rising towards k with s
+     * and a scale where it has reached k to double precision comes back.
      */
     public double bestScale(double referenceScale) {
         if (!(referenceScale > 0) || referenceScale == Double.POSITIVE_INFINITY) {
