@@ -28,10 +28,24 @@ import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactor
  *
  * <p><b>Quadrature.</b> The expectation over the noise is a product Gauss–Hermite rule over I and Q (Commons Math
  * {@link GaussIntegratorFactory#hermite}), {@value #DEFAULT_POINTS} points per dimension unless told otherwise.
- * Checked against adaptive Gauss–Legendre integration of the one-dimensional PAM integrals (square QAM is two
- * PAMs): with {@value #DEFAULT_POINTS} points the error stays below about 1e−4 bit up to 1024-QAM, below 1e−6 bit for
- * M ≤ 16 (see {@code CapacityTest}). Cost grows as M²·N² evaluations of exp. The constellation is scaled to its
- * E_s; the π/2-BPSK quarter turn does not change any rate and is ignored. Every exp and log is {@link StrictMath}, so
+ * The rule is least accurate at the knee of a curve, where the rate approaches log2 M. Measured against adaptive
+ * Gauss–Legendre integration of the one-dimensional PAM integrals over −6…40 dB (square QAM is two PAMs, so its error
+ * is twice the per-axis one):
+ *
+ * <table class="striped">
+ *   <caption>Largest error per real dimension, in bits (CM and BICM alike)</caption>
+ *   <thead><tr><th>points</th><th>2-PAM</th><th>4-PAM</th><th>8-PAM</th><th>16-PAM</th><th>32-PAM</th></tr></thead>
+ *   <tbody>
+ *     <tr><td>32 (default)</td><td>3.2e−5</td><td>4.9e−5</td><td>5.5e−5</td><td>6.2e−5</td><td>≈ 7e−5</td></tr>
+ *     <tr><td>64</td><td>1.3e−6</td><td>2.0e−6</td><td>2.4e−6</td><td>2.8e−6</td><td>2.9e−6</td></tr>
+ *     <tr><td>100</td><td>1.2e−7</td><td>1.8e−7</td><td>2.6e−7</td><td>2.7e−7</td><td>2.5e−7</td></tr>
+ *   </tbody>
+ * </table>
+ *
+ * (32 points: 0.2 dB grid, 32-PAM estimated from a 1 dB grid; 64 and 100 points: 1 dB grid.) At 32 points an error
+ * of 1e−4 bit moves a rate curve by well under 0.01 dB. Cost: 2·M²·N exponentials plus M²·N² multiply-adds (BICM:
+ * times k); 256-QAM takes a fraction of a second. The constellation is scaled to its E_s; the π/2-BPSK quarter turn
+ * does not change any rate and is ignored. Every exp and log is {@link StrictMath}, so
  * results are identical on every JVM.
  */
 public final class Capacity {

@@ -108,7 +108,7 @@ class ErrorRatesTest {
     @Test
     void craigIntegralEqualsTheClosedFormsForTwoAndFourPoints() {
         // Craig (MILCOM 1991): M = 2 gives Q(√(2Es/N0)); M = 4 gives 2Q(a) − Q(a)², a = √(Es/N0) (Proakis §4.3).
-        for (double db = -10; db <= 25; db += 2.5) {
+        for (double db = -10; db <= 30; db += 2.5) {
             double esN0 = Snr.fromDb(db);
             double bpsk = q(Math.sqrt(2 * esN0));
             assertEquals(bpsk, ErrorRates.pskSer(2, esN0), bpsk * 1e-10, "M=2 " + db);
