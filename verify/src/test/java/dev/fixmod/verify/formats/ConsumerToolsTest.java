@@ -44,7 +44,8 @@ class ConsumerToolsTest {
         String p = n.toUpperCase(java.util.Locale.ROOT);
         String shifts = layout.fields().stream().map(f -> Integer.toString(layout.shift(layout.fields().indexOf(f))))
                 .collect(Collectors.joining(", "));
-        String widths = layout.fields().stream().map(f -> Integer.toString(f.width())).collect(Collectors.joining(", "));
+        String widths = layout.fields().stream().map(f -> Integer.toString(f.width()))
+                .collect(Collectors.joining(", "));
         String signs = layout.fields().stream().map(f -> f.signed() ? "1" : "0").collect(Collectors.joining(", "));
         int wordBytes = StorageType.forWord(layout.wordWidth()).bytes();
         return """
@@ -175,8 +176,8 @@ class ConsumerToolsTest {
     void iverilogReadsTheHexWithAndWithoutComments() throws IOException {
         Path iverilog = ExternalProgram.require("the $readmemh check", "/usr/bin/iverilog");
         Path vvp = ExternalProgram.require("the $readmemh check", "/usr/bin/vvp", "vvp");
-        Tables mixed = new Tables(TableSpec.of("mix", FieldLayout.of(Field.of("label", "UQ4.0"), Field.of("llr", "Q5.2"),
-                Field.of("b", "UQ1.0")), 100), 5).withComments();
+        FieldLayout mix = FieldLayout.of(Field.of("label", "UQ4.0"), Field.of("llr", "Q5.2"), Field.of("b", "UQ1.0"));
+        Tables mixed = new Tables(TableSpec.of("mix", mix, 100), 5).withComments();
         for (Tables t : List.of(Tables.iq(300), mixed)) {
             for (FileFormat format : List.of(FileFormat.HEX, FileFormat.HEX_COMMENTED)) {
                 Path hex = write(t, format);
