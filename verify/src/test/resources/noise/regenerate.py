@@ -211,7 +211,8 @@ INV_PIO2 = _h('0x1.45f306dc9c883p-1')
 PIO2_1, PIO2_1T = _h('0x1.921fb544p0'), _h('0x1.0b4611a626331p-34')
 PIO2_2, PIO2_2T = _h('0x1.0b4611a6p-34'), _h('0x1.3198a2e037073p-69')
 PIO2_3, PIO2_3T = _h('0x1.3198a2ep-69'), _h('0x1.b839a252049c1p-104')
-NPIO2_HW = (0x3FF921FB, 0x400921FB, 0x4012D97C, 0x401921FB)  # the first entries of fdlibm's table: all 0 <= x < 7 reaches
+# The first entries of fdlibm's npio2_hw table: all that 0 <= x < 7 reaches.
+NPIO2_HW = (0x3FF921FB, 0x400921FB, 0x4012D97C, 0x401921FB)
 
 
 def _rem_pio2(x):

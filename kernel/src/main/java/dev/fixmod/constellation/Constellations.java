@@ -144,8 +144,9 @@ public final class Constellations {
      * with |I| = 3L/2 + 1 + 2c and |Q| = 1 + 2r moves to |I| = 1 + 2r, |Q| = L + 1 + 2c in the same quadrant, i.e.
      * its distance from the cross's edge and its distance from the axis swap roles.
      *
-     * <p>With {@code quasi-gray} (per-axis Gray on the rectangle) every nearest pair inside the central band or
-     * inside one arm differs in exactly one bit; only the pairs across an arm's base differ in more. Measured Gray
+     * <p>With {@code quasi-gray} (per-axis Gray on the rectangle) every nearest pair inside the central band
+     * |Q| ≤ L − 1 (which holds the left and right arms) or inside the top or bottom arm differs in exactly one bit;
+     * only the 2L pairs across the bases of the top and bottom arms differ in more. Measured Gray
      * penalty (average Hamming distance over nearest-neighbour pairs, {@link Metrics#grayPenalty}):
      *
      * <table class="striped">
@@ -301,7 +302,8 @@ public final class Constellations {
      * fold in the top bit, and the last returns to the first in the top bit. So every ring carries a cyclic Gray code.
      * Each ring after the first is then turned (start point and direction) to minimise the total Hamming distance over
      * the nearest-neighbour pairs among the rings placed so far; ties go to the smaller turn, counter-clockwise first.
-     * Measured Gray penalty: 4+12 APSK 1, 4+12+16 APSK 1.2, star 8-QAM 4/3 (with the catalogue radii).
+     * Measured Gray penalty: 4+12 APSK 1, 4+12+16 APSK 1.2, star 8-QAM 4/3 (with the catalogue radii; for star
+     * 8-QAM no labeling does better, checked exhaustively in the tests).
      *
      * @param ringSizes           points per ring, each ≥ 1, summing to a power of two 2..4096
      * @param radii               strictly increasing, finite, &gt; 0

@@ -8,6 +8,8 @@ public final class ExitStatus {
     public static final int MISMATCH = 1;
     /** Bad input or usage: one message on stderr, nothing written. */
     public static final int USAGE = 2;
+    /** A defect in fixmod itself; the message asks for a report. */
+    public static final int INTERNAL = 3;
 
     private ExitStatus() {
     }

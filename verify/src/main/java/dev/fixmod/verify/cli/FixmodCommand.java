@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
                 + " and quantization-loss reports.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                ConstellationCommand.class,
+                CompareCommand.class,
                 VectorsCommand.class
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
@@ -33,24 +35,43 @@ public final class FixmodCommand implements Runnable {
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
-            Throwable cause = ex;
-            if (cause instanceof UsageException || cause instanceof IllegalArgumentException) {
-                commandLine.getErr().println("fixmod " + commandLine.getCommandName() + ": " + cause.getMessage());
-                commandLine.getErr().flush();
-                return ExitStatus.USAGE;
+            String who = "fixmod" + (qualifiedName(commandLine).isEmpty() ? "" : " " + qualifiedName(commandLine));
+            if (ex instanceof UsageException || ex instanceof IllegalArgumentException) {
+                return fail(commandLine, who + ": " + ex.getMessage(), ExitStatus.USAGE);
             }
-            commandLine.getErr().println("fixmod " + commandLine.getCommandName() + ": internal error: " + cause);
-            commandLine.getErr().flush();
-            return 3;
+            if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {
+                Throwable io = ex instanceof java.io.UncheckedIOException ? ex.getCause() : ex;
+                return fail(commandLine, who + ": cannot read or write " + describe(io), ExitStatus.USAGE);
+            }
+            return fail(commandLine, who + ": internal error (please report): " + ex, ExitStatus.INTERNAL);
         });
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
-            c.getErr().println("fixmod " + c.getCommandName() + ": " + ex.getMessage());
-            c.getErr().println("Try 'fixmod " + qualifiedName(c) + " --help'.");
-            c.getErr().flush();
-            return ExitStatus.USAGE;
+            String name = qualifiedName(c);
+            return fail(c, "fixmod" + (name.isEmpty() ? "" : " " + name) + ": " + ex.getMessage()
+                    + " (see 'fixmod" + (name.isEmpty() ? "" : " " + name) + " --help')", ExitStatus.USAGE);
         });
         return cl;
+    }
+
+    private static int fail(CommandLine c, String message, int status) {
+        c.getErr().println(message);
+        c.getErr().flush();
+        return status;
+    }
+
+    /** A file-system failure in words: which file and what went wrong, without the exception's class name. */
+    private static String describe(Throwable io) {
+        if (io instanceof java.nio.file.NoSuchFileException e) {
+            return e.getFile() + ": no such file";
+        }
+        if (io instanceof java.nio.file.AccessDeniedException e) {
+            return e.getFile() + ": permission denied";
+        }
+        if (io instanceof java.nio.file.FileAlreadyExistsException e) {
+            return e.getFile() + ": already exists";
+        }
+        return String.valueOf(io.getMessage());
     }
 
     private static String qualifiedName(CommandLine c) {

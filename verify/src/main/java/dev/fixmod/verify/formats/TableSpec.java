@@ -47,7 +47,8 @@ public record TableSpec(String name, FieldLayout layout, long rows, List<String>
         for (String f : flagNames) {
             if (!FLAG.matcher(f).matches() || !flags.add(f)) {
                 throw new IllegalArgumentException("table " + name + ": flag name '" + f + "' is "
-                        + (FLAG.matcher(f).matches() ? "given twice" : "not accepted; use 1..64 letters, digits, '_' or '-'"));
+                        + (FLAG.matcher(f).matches() ? "given twice"
+                                : "not accepted; use 1..64 letters, digits, '_' or '-'"));
             }
         }
         for (int i = 0; i < comments.size(); i++) {

@@ -40,7 +40,7 @@ public record Awgn(double n0, Gaussian method) {
         return StrictMath.sqrt(n0 / 2.0);
     }
 
-    /** Stores noise samples {@code firstSample … firstSample + length − 1} of {@code key} into {@code i} and {@code q}. */
+    /** Stores noise samples {@code firstSample … firstSample + length − 1} of {@code key} into {@code i}, {@code q}. */
     public void fill(double[] i, int iOffset, double[] q, int qOffset, int length, StreamKey key, long firstSample) {
         Checks.slice("I", i.length, iOffset, length);
         Checks.slice("Q", q.length, qOffset, length);

@@ -174,7 +174,7 @@ final class SetFiles {
             e.put("signed", f.signed());
             e.put("word-msb", layout.shift(i) + f.width() - 1);
             e.put("word-lsb", layout.shift(i));
-            e.put("q-format", f.format().toString());
+            e.put("format", f.format().toString());
             e.put("meaning", f.format().describe());
         }
         return o;

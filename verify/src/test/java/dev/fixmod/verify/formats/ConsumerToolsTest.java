@@ -14,7 +14,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Our files read by the programs that consume them: gcc compiles a C program against the header and decodes both
- * binaries independently; NumPy loads the .npy; Icarus Verilog runs $readmemh (IEEE 1364-2005 §17.2.9) on the hex.
+ * binaries independently; NumPy parses the .npy header as version 1.0 with its own reader (numpy.lib.format,
+ * reference library) and loads the data; Icarus Verilog runs $readmemh (IEEE 1364-2005 §17.2.9) on the hex.
  * Each test is skipped with a visible message when its tool is missing.
  */
 class ConsumerToolsTest {
@@ -43,7 +44,8 @@ class ConsumerToolsTest {
         String p = n.toUpperCase(java.util.Locale.ROOT);
         String shifts = layout.fields().stream().map(f -> Integer.toString(layout.shift(layout.fields().indexOf(f))))
                 .collect(Collectors.joining(", "));
-        String widths = layout.fields().stream().map(f -> Integer.toString(f.width())).collect(Collectors.joining(", "));
+        String widths = layout.fields().stream().map(f -> Integer.toString(f.width()))
+                .collect(Collectors.joining(", "));
         String signs = layout.fields().stream().map(f -> f.signed() ? "1" : "0").collect(Collectors.joining(", "));
         int wordBytes = StorageType.forWord(layout.wordWidth()).bytes();
         return """
@@ -119,7 +121,12 @@ class ConsumerToolsTest {
         Path script = Files.writeString(dir.resolve("load.py"), """
                 import sys
                 import numpy as np
+                import numpy.lib.format as fmt
                 for npy, binary in zip(sys.argv[1::2], sys.argv[2::2]):
+                    with open(npy, 'rb') as f:
+                        assert fmt.read_magic(f) == (1, 0), 'not version 1.0'
+                        fmt.read_array_header_1_0(f)
+                        assert f.tell() % fmt.ARRAY_ALIGN == 0, 'data not aligned to ' + str(fmt.ARRAY_ALIGN)
                     a = np.load(npy, allow_pickle=False)
                     assert a.tobytes() == open(binary, 'rb').read(), 'npy data differ from ' + binary
                     print(a.dtype.str, a.shape, a.flags['C_CONTIGUOUS'])
@@ -169,8 +176,8 @@ class ConsumerToolsTest {
     void iverilogReadsTheHexWithAndWithoutComments() throws IOException {
         Path iverilog = ExternalProgram.require("the $readmemh check", "/usr/bin/iverilog");
         Path vvp = ExternalProgram.require("the $readmemh check", "/usr/bin/vvp", "vvp");
-        Tables mixed = new Tables(TableSpec.of("mix", FieldLayout.of(Field.of("label", "UQ4.0"), Field.of("llr", "Q5.2"),
-                Field.of("b", "UQ1.0")), 100), 5).withComments();
+        FieldLayout mix = FieldLayout.of(Field.of("label", "UQ4.0"), Field.of("llr", "Q5.2"), Field.of("b", "UQ1.0"));
+        Tables mixed = new Tables(TableSpec.of("mix", mix, 100), 5).withComments();
         for (Tables t : List.of(Tables.iq(300), mixed)) {
             for (FileFormat format : List.of(FileFormat.HEX, FileFormat.HEX_COMMENTED)) {
                 Path hex = write(t, format);

@@ -70,7 +70,8 @@ class OutputSetTest {
     void anExistingTargetIsReplacedOnlyWithForce() throws IOException {
         Path target = parent.resolve("set");
         Files.createDirectories(target.resolve("old"));
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> OutputSet.create(target, false));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> OutputSet.create(target, false));
         assertEquals("output folder " + target.toAbsolutePath() + " already exists; choose another folder or allow"
                 + " overwriting it (force)", e.getMessage());
         try (OutputSet set = OutputSet.create(target, true)) {
@@ -102,7 +103,8 @@ class OutputSetTest {
                 "..", "."}) {
                 IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> set.newFile(bad), bad);
                 assertEquals("file name '" + bad + "' inside the vector set must be a relative path that stays in the"
-                        + " set folder (no '..', no '.', no leading '/', no '\\'), e.g. tx/symbols.hex", e.getMessage());
+                        + " set folder (no '..', no '.', no leading '/', no '\\'), e.g. tx/symbols.hex",
+                        e.getMessage());
             }
             write(set, "tx/a.hex", "1");
             assertEquals("file tx/a.hex is written twice in vector set " + set.target(),

@@ -99,6 +99,13 @@ class Philox4x32Test {
     }
 
     @Test
+    void otherStreamsAndSeedsGiveOtherBlocks() {
+        StreamKey key = StreamKey.of(1, 2);
+        assertArrayEquals(encrypt(5, 0, 0, 0, 1, 3), Philox4x32.block(key.withStream(3), 5));
+        assertEquals(StreamKey.of(1, 3), key.withStream(3));
+    }
+
+    @Test
     void wordAndDrawFillsFollowTheBlocks() {
         StreamKey key = StreamKey.of(7, 3);
         int[] words = new int[41];

@@ -25,7 +25,8 @@ class RegenerationTest {
     @BeforeAll
     static void setUp() {
         python = ExternalProgram.requirePython(null, "the Python regeneration proof of the noise generator");
-        script = ExternalProgram.copyResource(RegenerationTest.class, "/noise/regenerate.py", dir.resolve("regenerate.py"));
+        script = ExternalProgram.copyResource(RegenerationTest.class, "/noise/regenerate.py",
+                dir.resolve("regenerate.py"));
     }
 
     private static List<String> python(String... args) {
