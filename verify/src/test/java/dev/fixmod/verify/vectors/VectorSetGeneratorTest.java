@@ -47,7 +47,11 @@ class VectorSetGeneratorTest {
 
     /** One row per vector of a port's CSV, as column name → text. */
     static List<Map<String, String>> csv(String name) throws IOException {
-        List<String> lines = Files.readAllLines(set.resolve(name), StandardCharsets.US_ASCII);
+        return csv(set, name);
+    }
+
+    static List<Map<String, String>> csv(Path dir, String name) throws IOException {
+        List<String> lines = Files.readAllLines(dir.resolve(name), StandardCharsets.US_ASCII);
         String[] header = lines.get(0).split(",", -1);
         List<Map<String, String>> rows = new ArrayList<>();
         for (String line : lines.subList(1, lines.size())) {
@@ -334,6 +338,25 @@ class VectorSetGeneratorTest {
             assertEquals(-1L, Files.mismatch(one.resolve(e.name()), two.resolve(e.name())), e.name());
         }
         assertFalse(a.files().isEmpty());
+    }
+
+    @Test
+    void aUserBitFileTravelsWithTheSetAndRegenerates(@TempDir Path dir) throws IOException {
+        // 8-PSK labels of 3 bits from a file with a comment line and white space; 7 bits repeat cyclically.
+        Files.writeString(dir.resolve("my.bits"), "# test pattern\n110 0101\n");
+        VectorSpec s = SpecReader.parse("{\"constellation\": \"psk8\", \"count\": 7, \"bits\": {\"source\": \"file\","
+                + " \"file\": \"my.bits\"}, \"formats\": [\"csv\"], \"corner-cases\": []}", "u.json");
+        Path out = dir.resolve("u");
+        Manifest m = VectorSetGenerator.of(s, dir).writeTo(out, false, VectorSetGenerator.Options.single());
+        assertEquals("source-bits.txt", m.spec().get("bits").get("file").asText());
+        assertEquals(-1L, Files.mismatch(dir.resolve("my.bits"), out.resolve("source-bits.txt")));
+        List<Map<String, String>> bits = csv(out, "bits.csv");
+        // 1100101 1100101 1100101 ... cut in threes: 110 010 111 001 011 100 101
+        int[] expected = {6, 2, 7, 1, 3, 4, 5};
+        for (int n = 0; n < 7; n++) {
+            assertEquals(expected[n], Integer.parseInt(bits.get(n).get("label")), "label " + n);
+        }
+        assertEquals(List.of(), VectorSetChecker.check(out));
     }
 
     private static boolean contains(long[] values, long v) {
