@@ -6,6 +6,7 @@ import dev.fixmod.fixed.FixedPoint;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
@@ -97,6 +98,26 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
             f = spec.metric().fit(t[j] - Math.abs(f), metricFractionalBits, c);
             into.add(FixedLlrTrace.Value.code("fold" + j, f, metricFractionalBits, c.events() > before));
         }
+    }
+
+    /**
+     * Per axis: the input fitted into the metric format, then per further fold an absolute value and a subtraction
+     * (two additions) and the metric stage. Tables: the fold constants.
+     */
+    @Override
+    DatapathCost frontCost() {
+        DatapathCost total = DatapathCost.ZERO;
+        int wm = spec.metric().format().wordLength();
+        for (long[] t : thresholds) {
+            if (t.length == 0) {
+                continue;
+            }
+            total = total.plus(stage(spec.metric(), inputFractionalBits));
+            int folds = t.length - 1;
+            total = total.plus(new DatapathCost(0, 2, 0, 0).plus(stage(spec.metric(), metricFractionalBits))
+                    .repeated(folds)).plus(new DatapathCost(0, 0, 0, (long) folds * wm));
+        }
+        return total;
     }
 
     @Override

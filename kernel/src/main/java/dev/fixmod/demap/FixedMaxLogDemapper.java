@@ -2,6 +2,7 @@ package dev.fixmod.demap;
 
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
@@ -69,6 +70,18 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
         into.add(FixedLlrTrace.Value.code("distance1", distance[s1], exactFractionalBits, false));
         into.add(FixedLlrTrace.Value.code("metric-exact", sign * (distance[s1] - distance[s0]), exactFractionalBits,
                 false));
+    }
+
+    /**
+     * Per point: two differences, two squares and their sum. Per bit: the two halves' minima, their difference and
+     * the metric stage. Tables: the quantized points.
+     */
+    @Override
+    DatapathCost frontCost() {
+        long m = distance.length;
+        return new DatapathCost(2 * m, 3 * m, 0, 2 * m * spec.input().wordLength())
+                .plus(new DatapathCost(0, 1, m - 2, 0).plus(stage(spec.metric(), exactFractionalBits))
+                        .repeated(bitsPerSymbol));
     }
 
     @Override

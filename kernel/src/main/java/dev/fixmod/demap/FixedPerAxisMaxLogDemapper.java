@@ -3,6 +3,7 @@ package dev.fixmod.demap;
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
@@ -94,6 +95,28 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
         into.add(FixedLlrTrace.Value.code("level1", oneCode[b][s], frac, false));
         into.add(FixedLlrTrace.Value.code("metric-exact", slope[b][s] * (2 * y - offset[b][s]), exactFractionalBits,
                 false));
+    }
+
+    /**
+     * Per bit: the binary search, {@code 2y − (c0 + c1)} (one addition), the product by {@code c0 − c1} (not
+     * counted when every segment's slope is 0 or a power of two: a shift) and the metric stage. Tables per bit:
+     * boundaries, slopes and offsets, each one bit wider than an input code.
+     */
+    @Override
+    DatapathCost frontCost() {
+        DatapathCost total = DatapathCost.ZERO;
+        int entry = spec.input().wordLength() + 1;
+        for (int b = 0; b < bitsPerSymbol; b++) {
+            int n = slope[b].length;
+            boolean shiftsOnly = true;
+            for (long s : slope[b]) {
+                shiftsOnly &= Long.bitCount(Math.abs(s)) <= 1;
+            }
+            total = total.plus(new DatapathCost(shiftsOnly ? 0 : 1, 1, AxisSegments.searchComparisons(n - 1),
+                    (long) entry * (n - 1 + 2 * n)))
+                    .plus(stage(spec.metric(), exactFractionalBits));
+        }
+        return total;
     }
 
     @Override

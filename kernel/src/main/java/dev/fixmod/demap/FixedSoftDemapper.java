@@ -5,6 +5,9 @@ import dev.fixmod.fixed.FixedPoint;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
+import dev.fixmod.fixed.Quantizer;
+import dev.fixmod.fixed.Rounding;
+import dev.fixmod.map.DatapathCost;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -141,6 +144,35 @@ public abstract class FixedSoftDemapper {
     public final List<OverflowCounter> counters() {
         return List.of(metricCounter, scaleCounter, outputCounter);
     }
+
+    /**
+     * The operations of one sample through this datapath, in the units of {@link DatapathCost}: the metric front end
+     * (see each datapath), then per bit the multiplication by K and the scale and output stages. A stage costs one
+     * addition when it drops fractional bits with a rounding other than {@code floor}, and two comparisons unless it
+     * wraps. Table bits include K. The sign is free: hardware multiplies by −K instead.
+     */
+    public final DatapathCost cost() {
+        DatapathCost perBit;
+        long kBits = 0;
+        if (scaled) {
+            perBit = new DatapathCost(1, 0, 0, 0)
+                    .plus(stage(spec.scale(), productFractionalBits))
+                    .plus(stage(spec.output(), spec.scale().format().fractionalBits()));
+            kBits = spec.scaleConstant().wordLength();
+        } else {
+            perBit = stage(spec.output(), productFractionalBits);
+        }
+        return frontCost().plus(perBit.repeated(bitsPerSymbol)).plus(new DatapathCost(0, 0, 0, kBits));
+    }
+
+    /** The cost of fitting a value with {@code fromFractionalBits} fractional bits through {@code stage}. */
+    static DatapathCost stage(Quantizer stage, int fromFractionalBits) {
+        boolean rounds = fromFractionalBits > stage.format().fractionalBits() && stage.rounding() != Rounding.FLOOR;
+        return new DatapathCost(0, rounds ? 1 : 0, stage.overflow() == Overflow.WRAP ? 0 : 2, 0);
+    }
+
+    /** The cost of {@link #prepare} and every bit's {@link #metric}, metric stage included, with their tables. */
+    abstract DatapathCost frontCost();
 
     /** Sets every stage's event count to 0. */
     public final void resetCounters() {
