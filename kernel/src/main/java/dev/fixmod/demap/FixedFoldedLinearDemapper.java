@@ -1,11 +1,11 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
-import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.FixedPoint;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
+import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
@@ -28,11 +28,9 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
     private final int inputFractionalBits;
     private final int metricFractionalBits;
 
-    public FixedFoldedLinearDemapper(Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
-        super(SoftAlgorithm.FOLDED_LINEAR, constellation, options, spec);
+    public FixedFoldedLinearDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
+        super(SoftAlgorithm.FOLDED_LINEAR, reference, options, spec);
         AxisLayout layout = AxisSegments.requireSeparable(constellation, options, SoftAlgorithm.FOLDED_LINEAR);
-        FixedLevels.quantize(layout.iLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis I");
-        FixedLevels.quantize(layout.qLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis Q");
         FoldedAxis[] axes = FixedLevels.foldedAxes(constellation);
         AxisSegments.BitPlaces places = new AxisSegments.BitPlaces(layout);
         this.axis = places.axis;
@@ -44,7 +42,7 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
             sign[b] = options.sign().factor() * fa.polarity[places.position[b]];
         }
         QFormat mf = spec.metric().format();
-        this.inputFractionalBits = spec.input().fractionalBits();
+        this.inputFractionalBits = input.fractionalBits();
         this.metricFractionalBits = mf.fractionalBits();
         this.thresholds = new long[2][];
         this.folds = new long[2][];

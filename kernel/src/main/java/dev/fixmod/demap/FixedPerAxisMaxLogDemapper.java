@@ -1,14 +1,14 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
-import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
  * Per-dimension max-log in fixed point, for separable constellations (PAM, square and rectangular QAM). The axis
- * levels are quantized onto the input grid once; each bit then has a segment table (the doubled midpoints of its
+ * levels are the reference ROM's codes; each bit has a segment table (the doubled midpoints of its
  * bit-0 and bit-1 levels, and per segment the nearest level codes {@code c0}, {@code c1}). Per sample and bit: a binary
  * search of {@code 2y} in the table, then the exact integer
  * {@code D = ±(c0 − c1)·(2y − c0 − c1) = ±((y − c1)² − (y − c0)²)} with twice the input's fractional bits, fitted by
@@ -29,17 +29,15 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     private final long[][] oneCode;
     private final int exactFractionalBits;
 
-    public FixedPerAxisMaxLogDemapper(Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
-        super(SoftAlgorithm.MAX_LOG_PER_AXIS, constellation, options, spec);
+    public FixedPerAxisMaxLogDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
+        super(SoftAlgorithm.MAX_LOG_PER_AXIS, reference, options, spec);
         AxisLayout layout = AxisSegments.requireSeparable(constellation, options, SoftAlgorithm.MAX_LOG_PER_AXIS);
         AxisSegments.BitPlaces places = new AxisSegments.BitPlaces(layout);
-        long[][] codes = {
-            FixedLevels.quantize(layout.iLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis I"),
-            FixedLevels.quantize(layout.qLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis Q")};
+        long[][] codes = {FixedLevels.axisCodes(reference, layout, false), FixedLevels.axisCodes(reference, layout, true)};
         int[] axisBits = {layout.iBits().length, layout.qBits().length};
         int sign = options.sign().factor();
         this.axis = places.axis;
-        this.exactFractionalBits = 2 * spec.input().fractionalBits();
+        this.exactFractionalBits = 2 * input.fractionalBits();
         this.boundaries = new long[bitsPerSymbol][];
         this.slope = new long[bitsPerSymbol][];
         this.offset = new long[bitsPerSymbol][];
@@ -80,15 +78,15 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     @Override
     long metric(int b, long iCode, long qCode, OverflowCounter metric) {
         long twoY = 2 * (axis[b] == 0 ? iCode : qCode);
-        int s = AxisSegments.find(boundaries[b], twoY);
+        int s = AxisSegments.segmentOfCode(boundaries[b], twoY);
         return spec.metric().fit(slope[b][s] * (twoY - offset[b][s]), exactFractionalBits, metric);
     }
 
     @Override
     void describe(int b, long iCode, long qCode, List<FixedLlrTrace.Value> into) {
         long y = axis[b] == 0 ? iCode : qCode;
-        int s = AxisSegments.find(boundaries[b], 2 * y);
-        int frac = spec.input().fractionalBits();
+        int s = AxisSegments.segmentOfCode(boundaries[b], 2 * y);
+        int frac = input.fractionalBits();
         into.add(FixedLlrTrace.Value.code("y", y, frac, false));
         into.add(FixedLlrTrace.Value.index("segment", s));
         into.add(FixedLlrTrace.Value.code("level0", zeroCode[b][s], frac, false));
@@ -105,7 +103,7 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     @Override
     DatapathCost frontCost() {
         DatapathCost total = DatapathCost.ZERO;
-        int entry = spec.input().wordLength() + 1;
+        int entry = input.wordLength() + 1;
         for (int b = 0; b < bitsPerSymbol; b++) {
             int n = slope[b].length;
             boolean shiftsOnly = true;

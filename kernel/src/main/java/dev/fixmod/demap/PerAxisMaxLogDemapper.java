@@ -68,7 +68,7 @@ public final class PerAxisMaxLogDemapper extends SoftDemapper {
     void compute(double yRe, double yIm, double[] llr, int llrOffset) {
         for (int b = 0; b < bitsPerSymbol; b++) {
             double twoY = 2 * (axis[b] == 0 ? yRe : yIm);
-            int s = AxisSegments.find(boundaries[b], twoY);
+            int s = AxisSegments.segmentOf(boundaries[b], twoY);
             llr[llrOffset + b] = gain[b][s] * (twoY - offset[b][s]) + 0.0; // + 0.0 turns −0.0 into 0.0
         }
     }

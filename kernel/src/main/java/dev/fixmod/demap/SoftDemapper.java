@@ -27,6 +27,10 @@ public abstract class SoftDemapper {
         this.algorithm = algorithm;
         this.constellation = Objects.requireNonNull(constellation, "constellation");
         this.options = Objects.requireNonNull(options, "options");
+        if (constellation.alternatesQuarterTurn()) {
+            throw new IllegalArgumentException(constellation.name() + " turns odd symbols by +90°: derotate them by"
+                    + " −90° before demapping and use the plain two-point constellation");
+        }
         this.bitsPerSymbol = constellation.bitsPerSymbol();
         this.oneDimensional = isOneDimensional(constellation);
     }
