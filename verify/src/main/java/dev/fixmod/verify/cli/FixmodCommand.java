@@ -11,7 +11,8 @@ import picocli.CommandLine.Command;
         description = "Bit-exact reference kernel for digital modulation, with golden vectors, device comparison"
                 + " and quantization-loss reports.",
         subcommands = {
-                CommandLine.HelpCommand.class
+                CommandLine.HelpCommand.class,
+                DemapCommand.class
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
                 "Results are engineering models, not conformance certification; the governing standard's text decides."})
