@@ -121,9 +121,4 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     String axisOf(int b) {
         return axis[b] == 0 ? "I" : "Q";
     }
-
-    /** The number of segments of bit {@code b}'s table. */
-    public int segments(int b) {
-        return slope[b].length;
-    }
 }

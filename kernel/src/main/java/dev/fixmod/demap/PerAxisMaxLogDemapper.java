@@ -87,9 +87,4 @@ public final class PerAxisMaxLogDemapper extends SoftDemapper {
         }
         return total;
     }
-
-    /** The number of segments of bit {@code b}'s closed form. */
-    public int segments(int b) {
-        return gain[b].length;
-    }
 }
