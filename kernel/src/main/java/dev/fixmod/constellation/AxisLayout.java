@@ -26,8 +26,8 @@ public final class AxisLayout {
     public AxisLayout(int[] iBits, int[] qBits, double[] iLevels, double[] qLevels) {
         this.iBits = iBits.clone();
         this.qBits = qBits.clone();
-        this.iLevels = iLevels.clone();
-        this.qLevels = qLevels.clone();
+        this.iLevels = Constellation.positiveZeros(iLevels);
+        this.qLevels = Constellation.positiveZeros(qLevels);
         int k = iBits.length + qBits.length;
         boolean[] seen = new boolean[k];
         for (int b : concat(iBits, qBits)) {
@@ -99,7 +99,11 @@ public final class AxisLayout {
 
     /** The label whose I sub-label is {@code subI} and Q sub-label is {@code subQ}. */
     public int compose(int subI, int subQ) {
-        int k = bitsPerSymbol();
+        return compose(iBits, qBits, subI, subQ);
+    }
+
+    private static int compose(int[] iBits, int[] qBits, int subI, int subQ) {
+        int k = iBits.length + qBits.length;
         int label = 0;
         for (int j = 0; j < iBits.length; j++) {
             int bit = (subI >>> (iBits.length - 1 - j)) & 1;
@@ -129,6 +133,52 @@ public final class AxisLayout {
             sub = (sub << 1) | ((label >>> (k - 1 - position)) & 1);
         }
         return sub;
+    }
+
+    /**
+     * The layout of points that are separable, or {@code null}. Points are separable when flipping any one label bit
+     * changes only I or only Q (never both) for every label; then I depends only on the bits that change it and Q
+     * only on the others. Bits are listed in increasing position, so the lowest-numbered I bit is the most significant
+     * bit of the I sub-label (as in 3GPP TS 38.211, where I carries b0, b2, …).
+     *
+     * @param re real parts by label, M = 2^k of them, distinct points assumed
+     * @param im imaginary parts by label
+     */
+    static AxisLayout detect(double[] re, double[] im) {
+        int m = re.length;
+        int k = Integer.numberOfTrailingZeros(m);
+        int[] iBits = new int[k];
+        int[] qBits = new int[k];
+        int ni = 0;
+        int nq = 0;
+        for (int position = 0; position < k; position++) {
+            int mask = 1 << (k - 1 - position);
+            boolean changesRe = false;
+            boolean changesIm = false;
+            for (int label = 0; label < m; label++) {
+                changesRe |= re[label] != re[label ^ mask];
+                changesIm |= im[label] != im[label ^ mask];
+            }
+            if (changesRe == changesIm) {
+                return null;
+            }
+            if (changesRe) {
+                iBits[ni++] = position;
+            } else {
+                qBits[nq++] = position;
+            }
+        }
+        int[] iPositions = Arrays.copyOf(iBits, ni);
+        int[] qPositions = Arrays.copyOf(qBits, nq);
+        double[] iLevels = new double[1 << ni];
+        double[] qLevels = new double[1 << nq];
+        for (int sub = 0; sub < iLevels.length; sub++) {
+            iLevels[sub] = re[compose(iPositions, qPositions, sub, 0)];
+        }
+        for (int sub = 0; sub < qLevels.length; sub++) {
+            qLevels[sub] = im[compose(iPositions, qPositions, 0, sub)];
+        }
+        return new AxisLayout(iPositions, qPositions, iLevels, qLevels);
     }
 
     /** This layout with every level multiplied by {@code factor}. */

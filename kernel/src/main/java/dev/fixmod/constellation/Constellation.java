@@ -6,15 +6,27 @@ import java.util.Objects;
 /**
  * An immutable constellation of M = 2^k points, stored by label: {@code re(label)}, {@code im(label)}. Label bit b0 is
  * the first bit in time and the most significant bit of the label. Validation lives here and only here: M a power of
- * two, labels a permutation of 0..M−1, distinct finite points, probabilities that are finite, non-negative and sum to 1.
+ * two, labels a permutation of 0..M−1, distinct finite points, probabilities that are finite, non-negative and sum to 1
+ * within {@value #PROBABILITY_SUM_TOLERANCE}.
  *
- * <p>A separable constellation (PAM, square and rectangular QAM) also carries its {@link AxisLayout}, which the
- * per-axis slicers and per-dimension demappers need. π/2-BPSK is stored as its even-index constellation with
- * {@link #alternatesQuarterTurn()} set: symbols of odd index are rotated by +90°.
+ * <p>A separable constellation (PAM, square and rectangular QAM, BPSK, QPSK at 45°, any user grid whose I depends on
+ * some label bits and Q on the others) carries its {@link AxisLayout}, which the per-axis slicers and per-dimension
+ * demappers need; it is found from the points when the factory does not give it. π/2-BPSK is stored as its even-index
+ * constellation with {@link #alternatesQuarterTurn()} set: symbols of odd index are rotated by +90°; it has no axis
+ * layout because the rotation moves its bit from one axis to the other.
+ *
+ * <p>A coordinate of −0.0 is stored as +0.0, so tables, hex words and text outputs never show a signed zero.
  */
 public final class Constellation {
-    /** Tolerance on the sum of probabilities. */
-    private static final double PROBABILITY_SUM_TOLERANCE = 1e-9;
+    /** Tolerance on the sum of probabilities: loose enough for probabilities printed with 10 digits. */
+    public static final double PROBABILITY_SUM_TOLERANCE = 1e-9;
+
+    /**
+     * A normalization factor within this distance of 1 is applied as exactly 1, so a constellation that is already at
+     * its target (PSK on the unit circle, the published 3GPP and IEEE points, anything normalized once) is kept bit for
+     * bit instead of being moved by an ulp. No Q format shorter than 40 bits can see the difference.
+     */
+    public static final double UNIT_FACTOR_TOLERANCE = 1e-12;
 
     private final String name;
     private final Family family;
@@ -40,8 +52,8 @@ public final class Constellation {
             throw new IllegalArgumentException(name + ": " + m + " real parts but " + im.length + " imaginary parts");
         }
         this.bitsPerSymbol = Integer.numberOfTrailingZeros(m);
-        this.re = re.clone();
-        this.im = im.clone();
+        this.re = positiveZeros(re);
+        this.im = positiveZeros(im);
         for (int label = 0; label < m; label++) {
             if (!Double.isFinite(re[label]) || !Double.isFinite(im[label])) {
                 throw new IllegalArgumentException(name + ": point of label " + label + " is not finite ("
@@ -79,8 +91,17 @@ public final class Constellation {
         if (axes != null) {
             checkAxes(name, axes, this.re, this.im);
         }
-        this.axes = axes;
+        this.axes = axes != null || alternatesQuarterTurn ? axes : AxisLayout.detect(this.re, this.im);
         this.alternatesQuarterTurn = alternatesQuarterTurn;
+    }
+
+    /** A copy of {@code values} with −0.0 replaced by +0.0 (adding +0.0 does exactly that and nothing else). */
+    static double[] positiveZeros(double[] values) {
+        double[] copy = new double[values.length];
+        for (int n = 0; n < values.length; n++) {
+            copy[n] = values[n] + 0.0;
+        }
+        return copy;
     }
 
     private static void checkDistinct(String name, double[] re, double[] im) {
@@ -170,6 +191,52 @@ public final class Constellation {
         return new Constellation(name, family, labeling, re, im, probabilityByLabel, axes, alternatesQuarterTurn);
     }
 
+    /** This constellation under another name (e.g. the catalogue name it was resolved from). */
+    public Constellation withName(String newName) {
+        return new Constellation(newName, family, labeling, re, im, uniform ? null : probability, axes,
+                alternatesQuarterTurn);
+    }
+
+    /**
+     * This constellation with Maxwell–Boltzmann probabilities p(s) ∝ exp(−λ|s|²) on its present coordinates; λ = 0
+     * gives equiprobable symbols. Computed with {@link StrictMath} relative to the lowest energy, so large λ cannot
+     * underflow every weight.
+     *
+     * <table class="striped">
+     *   <caption>Probabilities of 4-PAM (±1, ±3) under a few λ</caption>
+     *   <thead><tr><th>λ</th><th>p(±1)</th><th>p(±3)</th></tr></thead>
+     *   <tbody>
+     *     <tr><td>0</td><td>0.25</td><td>0.25</td></tr>
+     *     <tr><td>0.1</td><td>1/(2(1+e^−0.8)) ≈ 0.3450</td><td>≈ 0.1550</td></tr>
+     *     <tr><td>1000</td><td>0.5</td><td>0 (e^−8000 underflows)</td></tr>
+     *   </tbody>
+     * </table>
+     *
+     * @param lambda λ, finite and ≥ 0
+     */
+    public Constellation withMaxwellBoltzmann(double lambda) {
+        if (!(lambda >= 0) || !Double.isFinite(lambda)) {
+            throw new IllegalArgumentException("Maxwell-Boltzmann parameter must be finite and >= 0, got " + lambda);
+        }
+        int m = re.length;
+        double[] energy = new double[m];
+        double lowest = Double.POSITIVE_INFINITY;
+        for (int label = 0; label < m; label++) {
+            energy[label] = re[label] * re[label] + im[label] * im[label];
+            lowest = Math.min(lowest, energy[label]);
+        }
+        double[] weight = new double[m];
+        double sum = 0;
+        for (int label = 0; label < m; label++) {
+            weight[label] = StrictMath.exp(-lambda * (energy[label] - lowest));
+            sum += weight[label];
+        }
+        for (int label = 0; label < m; label++) {
+            weight[label] /= sum;
+        }
+        return withProbabilities(weight);
+    }
+
     /** This constellation with every point multiplied by {@code factor > 0}. */
     public Constellation scaled(double factor) {
         if (!(factor > 0) || !Double.isFinite(factor)) {
@@ -185,25 +252,35 @@ public final class Constellation {
                 axes == null ? null : axes.scaled(factor), alternatesQuarterTurn);
     }
 
-    /** The factor that {@link #normalized} would apply. Uses {@link StrictMath} so it is identical on every JVM. */
+    /**
+     * The factor that {@link #normalized} would apply: 1/√(E_s), 1/√(E_s/k) or 1/√(max|s|²), computed with
+     * {@link StrictMath} so it is identical on every JVM, and exactly 1 when within {@value #UNIT_FACTOR_TOLERANCE} of
+     * 1. On an integer grid E_s is exact, so unit-energy 16-QAM gets exactly {@code 1 / StrictMath.sqrt(10)}.
+     */
     public double normalizationFactor(Normalization normalization) {
+        double factor;
         switch (normalization) {
             case NONE:
                 return 1.0;
             case UNIT_ENERGY:
-                return 1.0 / StrictMath.sqrt(averageEnergy());
+                factor = 1.0 / StrictMath.sqrt(averageEnergy());
+                break;
             case UNIT_BIT_ENERGY:
-                return 1.0 / StrictMath.sqrt(averageEnergy() / bitsPerSymbol);
+                factor = 1.0 / StrictMath.sqrt(averageEnergy() / bitsPerSymbol);
+                break;
             case UNIT_PEAK:
-                return 1.0 / StrictMath.sqrt(peakEnergy());
+                factor = 1.0 / StrictMath.sqrt(peakEnergy());
+                break;
             default:
                 throw new AssertionError(normalization);
         }
+        return Math.abs(factor - 1.0) <= UNIT_FACTOR_TOLERANCE ? 1.0 : factor;
     }
 
-    /** This constellation scaled by {@link #normalizationFactor}. */
+    /** This constellation scaled by {@link #normalizationFactor} (itself when the factor is 1). */
     public Constellation normalized(Normalization normalization) {
-        return normalization == Normalization.NONE ? this : scaled(normalizationFactor(normalization));
+        double factor = normalizationFactor(normalization);
+        return factor == 1.0 ? this : scaled(factor);
     }
 
     /** E_s = Σ p(s)·|s|², weighted by the symbol probabilities. */
