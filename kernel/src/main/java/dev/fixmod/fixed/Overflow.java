@@ -7,18 +7,31 @@ import java.util.stream.Collectors;
 /**
  * What happens to an integer result that lies outside its format's codes. Every mode records one event on the
  * stage's {@link OverflowCounter} for each value that did not fit (and, for {@code symmetric-saturate}, for each most
- * negative code it replaced).
+ * negative code it replaced). The test {@code DocTablesTest} checks every row of these tables against the code.
  *
  * <table class="striped">
- *   <caption>Results for an 8-bit signed word (codes −128 … 127)</caption>
- *   <thead><tr><th>value</th><th>saturate</th><th>symmetric-saturate</th><th>wrap</th><th>events</th></tr></thead>
+ *   <caption>Results for a signed 8-bit word, Q7.0 (codes −128 … 127); * marks an overflow event</caption>
+ *   <thead><tr><th>value</th><th>saturate</th><th>symmetric-saturate</th><th>wrap</th></tr></thead>
  *   <tbody>
- *     <tr><td>127</td><td>127</td><td>127</td><td>127</td><td>0</td></tr>
- *     <tr><td>128</td><td>127</td><td>127</td><td>−128</td><td>1</td></tr>
- *     <tr><td>300</td><td>127</td><td>127</td><td>44</td><td>1</td></tr>
- *     <tr><td>−127</td><td>−127</td><td>−127</td><td>−127</td><td>0</td></tr>
- *     <tr><td>−128</td><td>−128</td><td>−127</td><td>−128</td><td>0, 1 for symmetric-saturate</td></tr>
- *     <tr><td>−129</td><td>−128</td><td>−127</td><td>127</td><td>1</td></tr>
+ *     <tr><td>127</td><td>127</td><td>127</td><td>127</td></tr>
+ *     <tr><td>128</td><td>127*</td><td>127*</td><td>−128*</td></tr>
+ *     <tr><td>300</td><td>127*</td><td>127*</td><td>44*</td></tr>
+ *     <tr><td>−127</td><td>−127</td><td>−127</td><td>−127</td></tr>
+ *     <tr><td>−128</td><td>−128</td><td>−127*</td><td>−128</td></tr>
+ *     <tr><td>−129</td><td>−128*</td><td>−127*</td><td>127*</td></tr>
+ *     <tr><td>−300</td><td>−128*</td><td>−127*</td><td>−44*</td></tr>
+ *   </tbody>
+ * </table>
+ *
+ * <table class="striped">
+ *   <caption>Results for an unsigned 8-bit word, UQ8.0 (codes 0 … 255); * marks an overflow event</caption>
+ *   <thead><tr><th>value</th><th>saturate</th><th>symmetric-saturate</th><th>wrap</th></tr></thead>
+ *   <tbody>
+ *     <tr><td>255</td><td>255</td><td>255</td><td>255</td></tr>
+ *     <tr><td>256</td><td>255*</td><td>255*</td><td>0*</td></tr>
+ *     <tr><td>300</td><td>255*</td><td>255*</td><td>44*</td></tr>
+ *     <tr><td>0</td><td>0</td><td>0</td><td>0</td></tr>
+ *     <tr><td>−1</td><td>0*</td><td>0*</td><td>255*</td></tr>
  *   </tbody>
  * </table>
  *
@@ -68,41 +81,33 @@ public enum Overflow {
         return Arrays.stream(values()).map(Overflow::tradeName).collect(Collectors.joining(", "));
     }
 
-    /** Brings {@code value} into {@code format}'s codes by this mode, counting an event when it had to act. */
+    /**
+     * Brings {@code value} into {@code format}'s codes by this mode, recording an event on {@code counter} when it
+     * had to act.
+     */
     public long apply(long value, QFormat format, OverflowCounter counter) {
-        long min = format.minCode();
-        long max = format.maxCode();
-        switch (this) {
-            case SATURATE:
-                if (value > max) {
-                    counter.record();
-                    return max;
-                }
-                if (value < min) {
-                    counter.record();
-                    return min;
-                }
-                return value;
-            case SYMMETRIC_SATURATE:
-                long low = format.isSigned() ? -max : min;
-                if (value > max) {
-                    counter.record();
-                    return max;
-                }
-                if (value < low) {
-                    counter.record();
-                    return low;
-                }
-                return value;
-            case WRAP:
-                if (value >= min && value <= max) {
-                    return value;
-                }
-                counter.record();
-                return wrapBits(value, format);
-            default:
-                throw new AssertionError(this);
+        if (value >= lowestResult(format) && value <= format.maxCode()) {
+            return value;
         }
+        return beyond(value < 0, value, format, counter);
+    }
+
+    /** The smallest code this mode ever returns in {@code format}: {@code −max} for symmetric-saturate on a signed format. */
+    public long lowestResult(QFormat format) {
+        return this == SYMMETRIC_SATURATE && format.isSigned() ? -format.maxCode() : format.minCode();
+    }
+
+    /**
+     * Handles a value known to be outside the codes this mode returns, given only its sign and its low 64 bits
+     * (all that saturation and wrapping need); lets callers handle exact values wider than a {@code long}.
+     */
+    long beyond(boolean negative, long lowBits, QFormat format, OverflowCounter counter) {
+        counter.record();
+        return switch (this) {
+            case SATURATE -> negative ? format.minCode() : format.maxCode();
+            case SYMMETRIC_SATURATE -> negative ? lowestResult(format) : format.maxCode();
+            case WRAP -> wrapBits(lowBits, format);
+        };
     }
 
     /** The low W bits of {@code value}, read as a code of {@code format} (sign-extended if signed). */

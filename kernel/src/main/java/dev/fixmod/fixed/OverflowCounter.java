@@ -10,7 +10,7 @@ public final class OverflowCounter {
     private long events;
 
     public OverflowCounter(String stage) {
-        this.stage = stage;
+        this.stage = java.util.Objects.requireNonNull(stage, "stage");
     }
 
     /** A counter for code that must pass one but does not report it. */

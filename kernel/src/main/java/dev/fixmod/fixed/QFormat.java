@@ -12,7 +12,7 @@ import java.util.regex.Pattern;
  * {@code c · 2^-n}. The short form {@code Qn} means {@code Q0.n}.
  *
  * <table class="striped">
- *   <caption>Examples</caption>
+ *   <caption>Examples of Q formats</caption>
  *   <thead><tr><th>short form</th><th>word length</th><th>fractional bits</th><th>codes</th><th>range</th><th>LSB</th></tr></thead>
  *   <tbody>
  *     <tr><td>{@code Q15}</td><td>16</td><td>15</td><td>−32768 … 32767</td><td>[−1, 1 − 2^−15]</td><td>2^−15</td></tr>
@@ -31,7 +31,9 @@ public final class QFormat {
     /** The widest word a format may have. */
     public static final int MAX_WORD_LENGTH = 32;
 
-    private static final Pattern SHORT_FORM = Pattern.compile("(U?)Q(\\d{1,2})(?:\\.(\\d{1,2}))?");
+    // Up to 9 digits so any digit string parses as an int and is then rejected by the range checks with a reason.
+    private static final Pattern SHORT_FORM =
+            Pattern.compile("(U?)Q(\\d{1,9})(?:\\.(\\d{1,9}))?", Pattern.CASE_INSENSITIVE);
 
     private final boolean signed;
     private final int integerBits;
@@ -80,7 +82,23 @@ public final class QFormat {
     }
 
     /**
-     * Parses {@code Qm.n}, {@code Qn} (meaning {@code Q0.n}), {@code UQm.n} or {@code UQn}.
+     * The unsigned format of the given word length and fractional bits, e.g. {@code unsignedWord(8, 8)} is
+     * {@code UQ0.8}.
+     */
+    public static QFormat unsignedWord(int wordLength, int fractionalBits) {
+        if (wordLength < 1 || wordLength > MAX_WORD_LENGTH) {
+            throw new IllegalArgumentException("word length must be 1.." + MAX_WORD_LENGTH + ", got " + wordLength);
+        }
+        if (fractionalBits < 0 || fractionalBits > wordLength) {
+            throw new IllegalArgumentException("an unsigned " + wordLength + "-bit word holds 0.." + wordLength
+                    + " fractional bits, got " + fractionalBits);
+        }
+        return new QFormat(false, wordLength - fractionalBits, fractionalBits);
+    }
+
+    /**
+     * Parses {@code Qm.n}, {@code Qn} (meaning {@code Q0.n}), {@code UQm.n} or {@code UQn}; the letters may be in
+     * either case.
      *
      * @throws IllegalArgumentException naming the text and what is accepted
      */
@@ -94,6 +112,7 @@ public final class QFormat {
                     + " (e.g. Q1.14, Q15, UQ0.8)");
         }
         boolean isSigned = m.group(1).isEmpty();
+        // Integer.parseInt cannot fail: at most 9 digits.
         int first = Integer.parseInt(m.group(2));
         try {
             if (m.group(3) == null) {
@@ -169,12 +188,27 @@ public final class QFormat {
 
     /**
      * The explicit meaning, e.g.
-     * {@code Q1.14 (signed, 16-bit word, 14 fractional bits, range [-2, 1.99993896484375], LSB 2^-14)}.
+     * {@code Q1.14 (signed, 16-bit word, 14 fractional bits, range [-2, 1.99993896484375], LSB 2^-14)};
+     * the range is exact and an integer format says {@code LSB 1}.
      */
     public String describe() {
-        return String.format(Locale.ROOT, "%s (%s, %d-bit word, %d fractional bits, range [%s, %s], LSB 2^-%d)",
+        return String.format(Locale.ROOT, "%s (%s, %d-bit word, %d fractional bits, range [%s, %s], LSB %s)",
                 this, signed ? "signed" : "unsigned", wordLength(), fractionalBits,
-                plain(minValue()), plain(maxValue()), fractionalBits);
+                plain(minValue()), plain(maxValue()), fractionalBits == 0 ? "1" : "2^-" + fractionalBits);
+    }
+
+    /**
+     * Returns {@code code} if it is one of this format's codes.
+     *
+     * @param what names the operand in the message, e.g. {@code "a"}
+     * @throws IllegalArgumentException naming the operand, the code and the accepted codes
+     */
+    public long requireCode(long code, String what) {
+        if (code < minCode() || code > maxCode()) {
+            throw new IllegalArgumentException(what + " = " + code + " is not a code of " + this + " (codes "
+                    + minCode() + ".." + maxCode() + ")");
+        }
+        return code;
     }
 
     private static String plain(double v) {

@@ -8,10 +8,11 @@ import java.util.stream.Collectors;
  * How a value that falls between two codes becomes one of them. Each mode is named by the trade name used in the
  * command line, the specification files and the reports ({@link #tradeName()}).
  *
- * <p>The table gives the code chosen for a value expressed in LSBs (i.e. the value divided by the LSB):
+ * <p>The tables give the integer chosen for a value expressed in LSBs (the value divided by the LSB). The test
+ * {@code DocTablesTest} checks every row against the code, so the tables cannot drift from it.
  *
  * <table class="striped">
- *   <caption>Results of rounding to an integer number of LSBs</caption>
+ *   <caption>Rounding a value to an integer number of LSBs</caption>
  *   <thead><tr><th>value (LSB)</th><th>floor</th><th>ceil</th><th>toward-zero</th><th>half-up</th><th>half-away</th><th>half-even</th></tr></thead>
  *   <tbody>
  *     <tr><td>2.5</td><td>2</td><td>3</td><td>2</td><td>3</td><td>3</td><td>2</td></tr>
@@ -20,18 +21,35 @@ import java.util.stream.Collectors;
  *     <tr><td>1.1</td><td>1</td><td>2</td><td>1</td><td>1</td><td>1</td><td>1</td></tr>
  *     <tr><td>1.0</td><td>1</td><td>1</td><td>1</td><td>1</td><td>1</td><td>1</td></tr>
  *     <tr><td>0.5</td><td>0</td><td>1</td><td>0</td><td>1</td><td>1</td><td>0</td></tr>
+ *     <tr><td>0.25</td><td>0</td><td>1</td><td>0</td><td>0</td><td>0</td><td>0</td></tr>
  *     <tr><td>−0.0</td><td>0</td><td>0</td><td>0</td><td>0</td><td>0</td><td>0</td></tr>
+ *     <tr><td>−0.25</td><td>−1</td><td>0</td><td>0</td><td>0</td><td>0</td><td>0</td></tr>
  *     <tr><td>−0.5</td><td>−1</td><td>0</td><td>0</td><td>0</td><td>−1</td><td>0</td></tr>
  *     <tr><td>−1.1</td><td>−2</td><td>−1</td><td>−1</td><td>−1</td><td>−1</td><td>−1</td></tr>
  *     <tr><td>−1.5</td><td>−2</td><td>−1</td><td>−1</td><td>−1</td><td>−2</td><td>−2</td></tr>
+ *     <tr><td>−1.6</td><td>−2</td><td>−1</td><td>−1</td><td>−2</td><td>−2</td><td>−2</td></tr>
  *     <tr><td>−2.5</td><td>−3</td><td>−2</td><td>−2</td><td>−2</td><td>−3</td><td>−2</td></tr>
- *     <tr><td>−128.5 (Q7.0)</td><td>−129 → overflow</td><td>−128</td><td>−128</td><td>−128</td><td>−129 → overflow</td><td>−128</td></tr>
  *   </tbody>
  * </table>
  *
  * <p>Rounding never overflows by itself; a result outside the target format is then handled by the chosen
- * {@link Overflow} mode (last row: −128.5 LSB rounds to −129 under {@code floor}, one below the most negative code of
- * an 8-bit word).
+ * {@link Overflow} mode. At the ends of a format's range the two combine as follows:
+ *
+ * <table class="striped">
+ *   <caption>Quantizing to Q7.0 (codes −128 … 127) with saturate; * marks an overflow event</caption>
+ *   <thead><tr><th>value (LSB)</th><th>floor</th><th>ceil</th><th>toward-zero</th><th>half-up</th><th>half-away</th><th>half-even</th></tr></thead>
+ *   <tbody>
+ *     <tr><td>127.75</td><td>127</td><td>127*</td><td>127</td><td>127*</td><td>127*</td><td>127*</td></tr>
+ *     <tr><td>127.5</td><td>127</td><td>127*</td><td>127</td><td>127*</td><td>127*</td><td>127*</td></tr>
+ *     <tr><td>127.25</td><td>127</td><td>127*</td><td>127</td><td>127</td><td>127</td><td>127</td></tr>
+ *     <tr><td>−128.0</td><td>−128</td><td>−128</td><td>−128</td><td>−128</td><td>−128</td><td>−128</td></tr>
+ *     <tr><td>−128.25</td><td>−128*</td><td>−128</td><td>−128</td><td>−128</td><td>−128</td><td>−128</td></tr>
+ *     <tr><td>−128.5</td><td>−128*</td><td>−128</td><td>−128</td><td>−128</td><td>−128*</td><td>−128</td></tr>
+ *     <tr><td>−128.75</td><td>−128*</td><td>−128</td><td>−128</td><td>−128*</td><td>−128*</td><td>−128*</td></tr>
+ *   </tbody>
+ * </table>
+ *
+ * <p>(127.5 under {@code half-even} goes to the even 128, one above the largest code; −128.5 goes to the even −128.)
  *
  * <p><b>Beware the JDK names.</b> {@link java.math.RoundingMode#HALF_UP} rounds ties away from zero: it is our
  * {@link #HALF_AWAY}, not our {@link #HALF_UP}. Our {@code half-up} (ties toward +∞, "add half an LSB then drop the
@@ -101,47 +119,32 @@ public enum Rounding {
     }
 
     /**
-     * Divides {@code value} by {@code 2^shift} and rounds the quotient to an integer by this mode; integer-only and
-     * exact. A {@code shift} of 0 returns {@code value}. Requires {@code 0 <= shift <= 62} and
-     * {@code |value| < 2^62}.
+     * Divides {@code value} by {@code 2^shift} and rounds the quotient to an integer by this mode: the integer-only
+     * core of requantization, exact for every {@code long}. A {@code shift} of 0 returns {@code value}.
+     *
+     * @throws IllegalArgumentException if {@code shift} is outside 0..63
      */
     public long shiftRight(long value, int shift) {
         if (shift == 0) {
             return value;
         }
+        if (shift < 0 || shift > 63) {
+            throw new IllegalArgumentException("shift must be 0..63, got " + shift);
+        }
         long floor = value >> shift;
-        long remainder = value - (floor << shift);
+        long remainder = value & ((1L << shift) - 1);
         if (remainder == 0) {
             return floor;
         }
         long half = 1L << (shift - 1);
-        switch (this) {
-            case FLOOR:
-                return floor;
-            case CEIL:
-                return floor + 1;
-            case TOWARD_ZERO:
-                return value < 0 ? floor + 1 : floor;
-            case HALF_UP:
-                return remainder >= half ? floor + 1 : floor;
-            case HALF_AWAY:
-                if (remainder != half) {
-                    return remainder > half ? floor + 1 : floor;
-                }
-                return value < 0 ? floor : floor + 1;
-            case HALF_EVEN:
-                if (remainder != half) {
-                    return remainder > half ? floor + 1 : floor;
-                }
-                return (floor & 1) == 0 ? floor : floor + 1;
-            default:
-                throw new AssertionError(this);
-        }
+        return roundsUp(value < 0, Long.compare(remainder, half), (floor & 1) != 0) ? floor + 1 : floor;
     }
 
     /**
-     * Rounds a finite double to an integral double by this mode; exact for every finite input. Used once when
-     * constants and stimulus are quantized, never in a per-sample fixed-point path.
+     * Rounds a finite double to an integral double by this mode; exact for every finite input, and never returns
+     * {@code -0.0}. Used when constants and stimulus are quantized, never in a per-sample fixed-point path.
+     *
+     * @throws IllegalArgumentException if {@code x} is NaN or infinite
      */
     public double roundToIntegral(double x) {
         if (Double.isNaN(x) || Double.isInfinite(x)) {
@@ -153,28 +156,27 @@ public enum Rounding {
         }
         // Sign of (x - floor) - 1/2, computed without rounding error: x - floor is exact for x > 0 and
         // ceil(x) - x is exact for x < 0 (Sterbenz), whereas x - floor can round for tiny negative x.
+        // An inexact x has |x| < 2^52, so its floor fits a long.
         int vsHalf = x > 0 ? Double.compare(x - floor, 0.5) : Double.compare(0.5, Math.ceil(x) - x);
-        switch (this) {
-            case FLOOR:
-                return floor;
-            case CEIL:
-                return floor + 1;
-            case TOWARD_ZERO:
-                return x < 0 ? floor + 1 : floor;
-            case HALF_UP:
-                return vsHalf >= 0 ? floor + 1 : floor;
-            case HALF_AWAY:
-                if (vsHalf != 0) {
-                    return vsHalf > 0 ? floor + 1 : floor;
-                }
-                return x < 0 ? floor : floor + 1;
-            case HALF_EVEN:
-                if (vsHalf != 0) {
-                    return vsHalf > 0 ? floor + 1 : floor;
-                }
-                return Math.IEEEremainder(floor, 2.0) == 0.0 ? floor : floor + 1;
-            default:
-                throw new AssertionError(this);
-        }
+        return roundsUp(x < 0, vsHalf, ((long) floor & 1) != 0) ? floor + 1 : floor;
+    }
+
+    /**
+     * The one decision that defines each mode, shared by every rounding path: whether an inexact quotient goes to
+     * {@code floor + 1} instead of {@code floor}.
+     *
+     * @param negative  whether the exact value is negative
+     * @param vsHalf    the sign of (exact value − floor) − ½: negative below a tie, 0 on a tie, positive above
+     * @param floorOdd  whether {@code floor} is odd
+     */
+    boolean roundsUp(boolean negative, int vsHalf, boolean floorOdd) {
+        return switch (this) {
+            case FLOOR -> false;
+            case CEIL -> true;
+            case TOWARD_ZERO -> negative;
+            case HALF_UP -> vsHalf >= 0;
+            case HALF_AWAY -> vsHalf > 0 || (vsHalf == 0 && !negative);
+            case HALF_EVEN -> vsHalf > 0 || (vsHalf == 0 && floorOdd);
+        };
     }
 }
