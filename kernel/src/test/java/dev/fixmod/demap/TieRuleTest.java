@@ -39,7 +39,8 @@ class TieRuleTest {
         if (c.isSeparable()) {
             assertEquals(expectedLabel, new FloatAxisSlicer(c).slice(re, im, 0), "float axis, " + where);
             assertEquals(expectedLabel, new FixedAxisSlicer(rom).slice(i, q, 0), "fixed axis, " + where);
-        } else {
+        }
+        if (c.family() == Family.PSK) {
             assertEquals(expectedLabel, new FloatSectorSlicer(c).slice(re, im, 0), "float sector, " + where);
             assertEquals(expectedLabel, new FixedSectorSlicer(c, f, Slicers.DEFAULT_SECTOR_COEFFICIENTS)
                     .slice(i, q, 0), "fixed sector, " + where);
