@@ -143,7 +143,8 @@ public final class ConstellationRom {
             if (other != null) {
                 throw new IllegalArgumentException(constellation.name() + " does not fit " + quantizer + which
                         + ": labels " + other + " and " + label + " both become codes (" + i[label] + ", " + q[label]
-                        + "); " + quantizer.format().describe() + " is too coarse: use more fractional bits");
+                        + "); " + quantizer.format().describe() + " is too coarse (the points, and any slicer"
+                        + " thresholds between them, would collide): use more fractional bits");
             }
         }
     }
