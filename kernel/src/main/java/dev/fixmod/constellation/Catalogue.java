@@ -151,18 +151,24 @@ public final class Catalogue {
      *                                  with a message saying what is accepted
      */
     public static Constellation resolve(String name, Options options) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT);
-        Constellation grid = onGrid(key, options);
-        return shapeAndNormalize(grid, options);
+        return shape(resolveOnGrid(name, options), options).normalized(options.normalization());
     }
 
     /**
-     * Applies the shaping and normalization of {@code options} to a constellation on its natural grid (e.g. read from
-     * a user's file). A λ &gt; 0 replaces any probabilities the constellation had.
+     * The named constellation on its natural grid with the labeling and phase offset of {@code options}, before
+     * shaping and normalization: {@code resolve(name, o)} is {@code shape(resolveOnGrid(name, o), o)
+     * .normalized(o.normalization())}.
      */
-    public static Constellation shapeAndNormalize(Constellation grid, Options options) {
-        Constellation shaped = options.shaping() > 0 ? grid.withMaxwellBoltzmann(options.shaping()) : grid;
-        return shaped.normalized(options.normalization());
+    public static Constellation resolveOnGrid(String name, Options options) {
+        return onGrid(name == null ? "" : name.trim().toLowerCase(Locale.ROOT), options);
+    }
+
+    /**
+     * Applies the Maxwell–Boltzmann shaping of {@code options} to a constellation on its natural grid (also one read
+     * from a user's file); λ &gt; 0 replaces any probabilities it had, λ = 0 keeps them.
+     */
+    public static Constellation shape(Constellation grid, Options options) {
+        return options.shaping() > 0 ? grid.withMaxwellBoltzmann(options.shaping()) : grid;
     }
 
     private static Constellation onGrid(String key, Options options) {

@@ -19,7 +19,8 @@ package dev.fixmod.constellation;
  *     <tr><td>SNR loss vs BPSK</td><td>10 log10(4/ε) dB (BPSK has ε = 4)</td><td>3.98 dB</td></tr>
  *     <tr><td>PAPR</td><td>10 log10(max|s|² / E_s) dB, of the points (before pulse shaping)</td><td>2.55 dB</td></tr>
  *     <tr><td>Gray penalty</td><td>Σ_s p(s) Σ_{s'∈N(s)} d_H(label, label') / Σ_s p(s) N(s): the average number of
- *         differing bits over nearest-neighbour pairs</td><td>1</td></tr>
+ *         differing bits over nearest-neighbour pairs (pairs weighed equally if every point that has a neighbour
+ *         at d_min has probability 0)</td><td>1</td></tr>
  *     <tr><td>entropy</td><td>−Σ p log2 p bits/symbol (exactly k when equiprobable)</td><td>4</td></tr>
  *   </tbody>
  * </table>
@@ -86,7 +87,18 @@ public final class Metrics {
             }
         }
         averageNeighbours = weightedNeighbours;
-        grayPenalty = weightedHamming / weightedNeighbours;
+        if (weightedNeighbours > 0) {
+            grayPenalty = weightedHamming / weightedNeighbours;
+        } else {
+            // every point with a neighbour at d_min has probability 0: weigh the pairs equally instead
+            long pairs = 0;
+            long bits = 0;
+            for (int label = 0; label < size; label++) {
+                pairs += neighbours[label];
+                bits += hamming[label];
+            }
+            grayPenalty = (double) bits / pairs;
+        }
         entropy = c.isUniform() ? bitsPerSymbol : h / StrictMath.log(2);
     }
 

@@ -159,6 +159,15 @@ class ConstellationsTest {
             }
             assertEquals(2 * l, across, "L pairs across the base of the top and of the bottom arm");
         }
+        // Measured values of our construction, documented at Constellations.crossQam (regression): Hamming sum over
+        // nearest pairs / number of nearest pairs.
+        int[][] documented = {{32, 60, 52}, {128, 264, 232}, {512, 1072, 976}, {2048, 4256, 4000}};
+        for (int[] d : documented) {
+            Constellation c = Constellations.crossQam(d[0], Labeling.QUASI_GRAY);
+            assertEquals(d[1], hammingSum(c.realParts(), c.imaginaryParts()), "cross " + d[0]);
+            assertEquals(d[2], Constellations.nearestPairs(c.realParts(), c.imaginaryParts()).length);
+            assertEquals((double) d[1] / d[2], Metrics.of(c).grayPenalty(), 1e-15);
+        }
     }
 
     @Test
@@ -190,6 +199,35 @@ class ConstellationsTest {
             best = Math.min(best, hammingSum(re, im));
         } while (nextPermutation(perm));
         assertEquals(best, ours);
+    }
+
+    @Test
+    void star8QuasiGrayIsOptimalAmongAllLabelings() {
+        // Exhaustive check over all 8! labelings of the star 8-QAM points: none has a smaller Hamming sum over the
+        // 12 nearest pairs than ours (16, Gray penalty 4/3 as documented).
+        Constellation c = Catalogue.resolve("star8", Catalogue.Options.DEFAULT.withNormalization(Normalization.NONE));
+        int[][] pairs = Constellations.nearestPairs(c.realParts(), c.imaginaryParts());
+        assertEquals(12, pairs.length);
+        long ours = hammingSum(c.realParts(), c.imaginaryParts());
+        assertEquals(16, ours);
+        int[] perm = {0, 1, 2, 3, 4, 5, 6, 7};
+        long best = Long.MAX_VALUE;
+        do {
+            long sum = 0;
+            for (int[] p : pairs) {
+                sum += Integer.bitCount(perm[p[0]] ^ perm[p[1]]);
+            }
+            best = Math.min(best, sum);
+        } while (nextPermutation(perm));
+        assertEquals(best, ours);
+    }
+
+    @Test
+    void ringQuasiGrayPenaltiesAsDocumented() {
+        // Measured values of our construction, documented at Constellations.apsk (regression, no outside source).
+        assertEquals(1.0, Metrics.of(Catalogue.resolve("apsk16")).grayPenalty(), 0.0);
+        assertEquals(1.2, Metrics.of(Catalogue.resolve("apsk32")).grayPenalty(), 1e-15);
+        assertEquals(4.0 / 3, Metrics.of(Catalogue.resolve("star8")).grayPenalty(), 1e-15);
     }
 
     private static long hammingSum(double[] re, double[] im) {

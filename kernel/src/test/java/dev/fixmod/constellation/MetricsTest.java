@@ -191,4 +191,15 @@ class MetricsTest {
         assertRelative(1.6, x.powerEfficiency(), "eps");
         assertRelative(Math.sqrt(0.4), x.minDistance(), "d_min");
     }
+
+    @Test
+    void grayPenaltyWhenOnlyImprobablePointsAreNearest() {
+        // Our documented fallback: 4 points on a line at 0, 1 (labels 00, 11) and 3, 5 (labels 01, 10); only the
+        // pair (0, 1) is at d_min, and it has probability 0, so the pairs are weighed equally: 2 bits per pair.
+        Constellation c = Constellation.ofPoints("u", "custom", new double[] {0, 1, 3, 5}, new double[] {0, 0, 0, 0},
+                new int[] {0b00, 0b11, 0b01, 0b10}, new double[] {0, 0, 0.5, 0.5});
+        Metrics x = Metrics.of(c);
+        assertEquals(0.0, x.averageNeighbours(), 0.0);
+        assertEquals(2.0, x.grayPenalty(), 0.0);
+    }
 }

@@ -12,6 +12,7 @@ import picocli.CommandLine.Command;
                 + " and quantization-loss reports.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                ConstellationCommand.class,
                 DemapCommand.class
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
