@@ -64,8 +64,8 @@ class FixedPointOracleTest {
     @Test
     void requantizeFromWiderFormatsMatchesBigDecimal() {
         // Source: JDK BigDecimal (exact): every code of 10-bit formats into every 6- and 8-bit format.
-        List<QFormat> sources = List.of(QFormat.parse("Q2.7"), QFormat.parse("Q9.0"), QFormat.parse("Q0.9"),
-                QFormat.parse("UQ3.7"), QFormat.parse("UQ0.10"), QFormat.parse("UQ10.0"));
+        List<QFormat> sources = List.of(QFormat.parse("Q2.7"), QFormat.parse("Q0.9"), QFormat.parse("UQ3.7"),
+                QFormat.parse("UQ10.0"));
         OverflowCounter counter = new OverflowCounter("test");
         for (QFormat from : sources) {
             for (long code = from.minCode(); code <= from.maxCode(); code++) {
@@ -89,12 +89,13 @@ class FixedPointOracleTest {
 
     @Test
     void addSubtractMultiplyMatchBigDecimalOnEveryPairOfCodes() {
-        // Source: JDK BigDecimal (exact sums, differences, products), every pair of codes of 6-bit formats.
+        // Source: JDK BigDecimal (exact sums, differences, products), every pair of codes of a 6-bit and a 5-bit
+        // format, signed and unsigned mixed.
         QFormat[][] pairs = {
-            {QFormat.parse("Q2.3"), QFormat.parse("Q0.5")},
-            {QFormat.parse("UQ3.3"), QFormat.parse("Q2.3")},
-            {QFormat.parse("Q5.0"), QFormat.parse("UQ0.6")},
-            {QFormat.parse("UQ6.0"), QFormat.parse("UQ2.4")},
+            {QFormat.parse("Q2.3"), QFormat.parse("Q0.4")},
+            {QFormat.parse("UQ3.3"), QFormat.parse("Q2.2")},
+            {QFormat.parse("Q5.0"), QFormat.parse("UQ0.5")},
+            {QFormat.parse("UQ6.0"), QFormat.parse("UQ2.3")},
         };
         OverflowCounter counter = new OverflowCounter("test");
         for (QFormat[] pair : pairs) {
@@ -162,8 +163,8 @@ class FixedPointOracleTest {
         long[] extremes = {Long.MIN_VALUE, Long.MIN_VALUE + 1, Long.MAX_VALUE, Long.MAX_VALUE - 1, -1, 1,
             1L << 62, -(1L << 62), (1L << 62) + 1, -(1L << 62) - 1};
         for (Rounding r : Rounding.values()) {
-            for (long v = -2048; v <= 2048; v++) {
-                for (int shift = 0; shift <= 13; shift++) {
+            for (long v = -700; v <= 700; v++) {
+                for (int shift = 0; shift <= 11; shift++) {
                     long expected = Oracle.round(Oracle.real(v, shift), r).longValueExact();
                     assertEquals(expected, r.shiftRight(v, shift), r + " " + v + " >> " + shift);
                 }

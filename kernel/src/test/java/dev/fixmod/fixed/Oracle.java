@@ -25,10 +25,29 @@ final class Oracle {
         return timesPowerOfTwo(new BigDecimal(code), -fractionalBits);
     }
 
-    /** {@code v · 2^k}, exact (a division by a power of two always terminates). */
+    /** {@code v · 2^k}, exact: 2^-k is the terminating decimal 5^k · 10^-k. */
     static BigDecimal timesPowerOfTwo(BigDecimal v, int k) {
-        BigDecimal p = new BigDecimal(BigInteger.ONE.shiftLeft(Math.abs(k)));
-        return k >= 0 ? v.multiply(p) : v.divide(p);
+        return v.multiply(powerOfTwo(k));
+    }
+
+    private static final int CACHED = 600;
+    private static final BigDecimal[] POWERS = new BigDecimal[2 * CACHED + 1];
+
+    private static BigDecimal powerOfTwo(int k) {
+        if (Math.abs(k) > CACHED) {
+            return exactPowerOfTwo(k);
+        }
+        BigDecimal p = POWERS[k + CACHED];
+        if (p == null) {
+            p = exactPowerOfTwo(k);
+            POWERS[k + CACHED] = p;
+        }
+        return p;
+    }
+
+    private static BigDecimal exactPowerOfTwo(int k) {
+        return k >= 0 ? new BigDecimal(BigInteger.ONE.shiftLeft(k))
+                : new BigDecimal(BigInteger.valueOf(5).pow(-k), -k); // 2^-k = 5^k / 10^k
     }
 
     /**
