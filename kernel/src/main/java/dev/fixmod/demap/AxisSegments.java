@@ -82,7 +82,7 @@ final class AxisSegments {
     }
 
     /** The segment of doubled coordinate {@code twoY}: the number of boundaries at or below it (binary search). */
-    static int find(double[] boundaries, double twoY) {
+    static int segmentOf(double[] boundaries, double twoY) {
         int low = 0;
         int high = boundaries.length;
         while (low < high) {
@@ -96,8 +96,8 @@ final class AxisSegments {
         return low;
     }
 
-    /** {@link #find} on integer boundaries. */
-    static int find(long[] boundaries, long twoY) {
+    /** {@link #segmentOf} on integer boundaries (integer-only). */
+    static int segmentOfCode(long[] boundaries, long twoY) {
         int low = 0;
         int high = boundaries.length;
         while (low < high) {
@@ -111,7 +111,7 @@ final class AxisSegments {
         return low;
     }
 
-    /** The number of comparisons {@link #find} makes on {@code n} boundaries: ⌈log2(n + 1)⌉. */
+    /** The number of comparisons {@link #segmentOf} makes on {@code n} boundaries: ⌈log2(n + 1)⌉. */
     static int searchComparisons(int n) {
         return 32 - Integer.numberOfLeadingZeros(n);
     }

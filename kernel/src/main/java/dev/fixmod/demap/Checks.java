@@ -28,7 +28,7 @@ final class Checks {
     }
 
     /** The message of a code outside its format. */
-    static IllegalArgumentException codeOutside(String axis, int index, long code, QFormat format) {
+    static IllegalArgumentException codeOutside(String axis, int index, int code, QFormat format) {
         return new IllegalArgumentException("received " + axis + " code " + code + " at index " + index
                 + " is outside " + format + " (codes " + format.minCode() + " … " + format.maxCode() + ")");
     }

@@ -34,8 +34,8 @@ public final class FixedAxisSlicer extends FixedSlicer {
 
     /**
      * @param reference the constellation's points quantized into the input format of the slicer
-     * @throws IllegalArgumentException if the constellation is not separable or two levels of an axis share a code
-     *                                  (their thresholds would collide)
+     * @throws IllegalArgumentException if the constellation is not separable (a format so coarse that two levels,
+     *                                  and so the thresholds between them, would collide is refused by the ROM)
      */
     public FixedAxisSlicer(ConstellationRom reference) {
         super(reference.constellation(), reference.format());
@@ -60,8 +60,8 @@ public final class FixedAxisSlicer extends FixedSlicer {
         }
         int[] iOrder = AxisLevels.subLabelsByAscendingLevel(toDouble(iCodes));
         int[] qOrder = AxisLevels.subLabelsByAscendingLevel(toDouble(qCodes));
-        iThresholds = thresholds(iCodes, iOrder, "I");
-        qThresholds = thresholds(qCodes, qOrder, "Q");
+        iThresholds = thresholds(iCodes, iOrder);
+        qThresholds = thresholds(qCodes, qOrder);
         labelByIndex = new int[iCount * qLevelCount];
         for (int a = 0; a < iCount; a++) {
             for (int b = 0; b < qLevelCount; b++) {
@@ -78,18 +78,11 @@ public final class FixedAxisSlicer extends FixedSlicer {
         return d;
     }
 
-    private int[] thresholds(int[] codes, int[] order, String axis) {
+    /** Levels are distinct codes: the ROM refuses two labels on one code pair, which equal levels would give. */
+    private static int[] thresholds(int[] codes, int[] order) {
         int[] t = new int[order.length - 1];
         for (int n = 0; n < t.length; n++) {
-            long a = codes[order[n]];
-            long b = codes[order[n + 1]];
-            if (a == b) {
-                throw new IllegalArgumentException(reference.constellation().name() + ": the " + axis
-                        + " levels of sub-labels " + order[n] + " and " + order[n + 1] + " both become code " + a
-                        + " in " + reference.format().describe() + ", so their thresholds collide; use more"
-                        + " fractional bits");
-            }
-            t[n] = (int) Math.floorDiv(a + b + 1, 2);
+            t[n] = (int) Math.floorDiv((long) codes[order[n]] + codes[order[n + 1]] + 1, 2);
         }
         return t;
     }

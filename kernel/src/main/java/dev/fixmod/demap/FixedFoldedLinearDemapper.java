@@ -1,11 +1,12 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
-import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.FixedPoint;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
+import dev.fixmod.map.ConstellationRom;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
@@ -27,11 +28,9 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
     private final int inputFractionalBits;
     private final int metricFractionalBits;
 
-    public FixedFoldedLinearDemapper(Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
-        super(SoftAlgorithm.FOLDED_LINEAR, constellation, options, spec);
+    public FixedFoldedLinearDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
+        super(SoftAlgorithm.FOLDED_LINEAR, reference, options, spec);
         AxisLayout layout = AxisSegments.requireSeparable(constellation, options, SoftAlgorithm.FOLDED_LINEAR);
-        FixedLevels.quantize(layout.iLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis I");
-        FixedLevels.quantize(layout.qLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis Q");
         FoldedAxis[] axes = FixedLevels.foldedAxes(constellation);
         AxisSegments.BitPlaces places = new AxisSegments.BitPlaces(layout);
         this.axis = places.axis;
@@ -43,7 +42,7 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
             sign[b] = options.sign().factor() * fa.polarity[places.position[b]];
         }
         QFormat mf = spec.metric().format();
-        this.inputFractionalBits = spec.input().fractionalBits();
+        this.inputFractionalBits = input.fractionalBits();
         this.metricFractionalBits = mf.fractionalBits();
         this.thresholds = new long[2][];
         this.folds = new long[2][];
@@ -97,6 +96,26 @@ public final class FixedFoldedLinearDemapper extends FixedSoftDemapper {
             f = spec.metric().fit(t[j] - Math.abs(f), metricFractionalBits, c);
             into.add(FixedLlrTrace.Value.code("fold" + j, f, metricFractionalBits, c.events() > before));
         }
+    }
+
+    /**
+     * Per axis: the input fitted into the metric format, then per further fold an absolute value and a subtraction
+     * (two additions) and the metric stage. Tables: the fold constants.
+     */
+    @Override
+    DatapathCost frontCost() {
+        DatapathCost total = DatapathCost.ZERO;
+        int wm = spec.metric().format().wordLength();
+        for (long[] t : thresholds) {
+            if (t.length == 0) {
+                continue;
+            }
+            total = total.plus(stage(spec.metric(), inputFractionalBits));
+            int folds = t.length - 1;
+            total = total.plus(new DatapathCost(0, 2, 0, 0).plus(stage(spec.metric(), metricFractionalBits))
+                    .repeated(folds)).plus(new DatapathCost(0, 0, 0, (long) folds * wm));
+        }
+        return total;
     }
 
     @Override

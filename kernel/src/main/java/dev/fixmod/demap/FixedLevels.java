@@ -2,15 +2,10 @@ package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
-import dev.fixmod.fixed.FixedPoint;
-import dev.fixmod.fixed.Overflow;
-import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
-import dev.fixmod.fixed.Rounding;
-import java.util.HashMap;
-import java.util.Map;
+import dev.fixmod.map.ConstellationRom;
 
-/** Construction-time quantization of a constellation onto an input grid, with the checks that it fits. */
+/** Construction-time helpers of the fixed-point LLR datapaths: reference levels, bounds, the scale constant. */
 final class FixedLevels {
     private FixedLevels() {
     }
@@ -19,55 +14,20 @@ final class FixedLevels {
     record Bounds(double metric) {
     }
 
-    /**
-     * The codes of {@code levels} in {@code input}.
-     *
-     * @throws IllegalArgumentException if a level lies outside the format or two levels share a code
-     */
-    static long[] quantize(double[] levels, QFormat input, Rounding rounding, String what) {
-        long[] codes = new long[levels.length];
-        Map<Long, Double> seen = new HashMap<>();
-        for (int n = 0; n < levels.length; n++) {
-            codes[n] = code(levels[n], input, rounding, what);
-            Double other = seen.put(codes[n], levels[n]);
-            if (other != null) {
-                throw tooCoarse(input, what, other, levels[n], codes[n]);
-            }
+    /** The constellation in the units of the ROM's codes: the ROM's points before quantization. */
+    static Constellation effective(ConstellationRom reference) {
+        return reference.scale() == 1.0 ? reference.constellation()
+                : reference.constellation().scaled(reference.scale());
+    }
+
+    /** The codes of an axis's levels, indexed by sub-label, read from the ROM. */
+    static long[] axisCodes(ConstellationRom reference, AxisLayout layout, boolean qAxis) {
+        int count = 1 << (qAxis ? layout.qBits().length : layout.iBits().length);
+        long[] codes = new long[count];
+        for (int sub = 0; sub < count; sub++) {
+            codes[sub] = qAxis ? reference.qCode(layout.compose(0, sub)) : reference.iCode(layout.compose(sub, 0));
         }
         return codes;
-    }
-
-    /** The codes of every point of {@code constellation}, as {@code {re codes, im codes}} by label. */
-    static long[][] quantizePoints(Constellation constellation, QFormat input, Rounding rounding) {
-        int m = constellation.size();
-        long[][] codes = new long[2][m];
-        Map<String, Integer> seen = new HashMap<>();
-        for (int s = 0; s < m; s++) {
-            codes[0][s] = code(constellation.re(s), input, rounding, constellation.name() + " label " + s + " (I)");
-            codes[1][s] = code(constellation.im(s), input, rounding, constellation.name() + " label " + s + " (Q)");
-            Integer other = seen.put(codes[0][s] + "," + codes[1][s], s);
-            if (other != null) {
-                throw new IllegalArgumentException("input format " + input + " is too coarse for "
-                        + constellation.name() + ": labels " + other + " and " + s + " both quantize to the point ("
-                        + codes[0][s] + ", " + codes[1][s] + "); add fractional bits");
-            }
-        }
-        return codes;
-    }
-
-    private static long code(double value, QFormat input, Rounding rounding, String what) {
-        OverflowCounter fit = OverflowCounter.unnamed();
-        long code = FixedPoint.quantize(value, input, rounding, Overflow.SATURATE, fit);
-        if (fit.events() > 0) {
-            throw new IllegalArgumentException("input format " + input.describe() + " is too narrow for " + what
-                    + ": it cannot hold the value " + value + "; add integer bits or normalize the constellation");
-        }
-        return code;
-    }
-
-    private static IllegalArgumentException tooCoarse(QFormat input, String what, double a, double b, long code) {
-        return new IllegalArgumentException("input format " + input + " is too coarse for " + what + ": levels " + a
-                + " and " + b + " both quantize to code " + code + "; add fractional bits");
     }
 
     /** The largest magnitude an input code can have, in real units. */

@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param qCode the Q input code
  * @param bits  one entry per label bit, b0 first
  */
-public record FixedLlrTrace(long iCode, long qCode, List<Bit> bits) {
+public record FixedLlrTrace(int iCode, int qCode, List<Bit> bits) {
 
     public FixedLlrTrace {
         bits = List.copyOf(bits);
@@ -25,7 +25,7 @@ public record FixedLlrTrace(long iCode, long qCode, List<Bit> bits) {
      * @param values the intermediate values in datapath order, ending with the {@code output} stage
      * @param llr    the output code (the same as the datapath's batch methods return)
      */
-    public record Bit(int bit, String axis, List<Value> values, long llr) {
+    public record Bit(int bit, String axis, List<Value> values, int llr) {
         public Bit {
             Objects.requireNonNull(axis, "axis");
             values = List.copyOf(values);

@@ -1,12 +1,12 @@
 package dev.fixmod.demap;
 
-import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.map.ConstellationRom;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
- * Exhaustive max-log in fixed point, for any constellation: the points are quantized onto the input grid once; per
- * sample the exact integer squared distance to every point is computed, and per bit
+ * Exhaustive max-log in fixed point, for any constellation: against the reference ROM's points, per sample the exact integer squared distance to every point is computed, and per bit
  * {@code D = ±(min_{b=1} d − min_{b=0} d)} (twice the input's fractional bits) goes through the metric, scale
  * (K = 1/N0) and output stages. It is the bit-exact oracle of {@link FixedPerAxisMaxLogDemapper}, and the fixed
  * datapath for non-separable constellations (PSK, APSK, custom).
@@ -21,14 +21,18 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
     private final int exactFractionalBits;
     private final int sign;
 
-    public FixedMaxLogDemapper(Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
-        super(SoftAlgorithm.MAX_LOG, constellation, options, spec);
-        long[][] codes = FixedLevels.quantizePoints(constellation, spec.input(), spec.constantRounding());
-        this.re = codes[0];
-        this.im = codes[1];
+    public FixedMaxLogDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
+        super(SoftAlgorithm.MAX_LOG, reference, options, spec);
+        int m = reference.size();
+        this.re = new long[m];
+        this.im = new long[m];
+        for (int s = 0; s < m; s++) {
+            re[s] = reference.iCode(s);
+            im[s] = reference.qCode(s);
+        }
         this.distance = new long[constellation.size()];
         this.partition = new BitPartition(bitsPerSymbol);
-        this.exactFractionalBits = 2 * spec.input().fractionalBits();
+        this.exactFractionalBits = 2 * input.fractionalBits();
         this.sign = options.sign().factor();
     }
 
@@ -69,6 +73,18 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
         into.add(FixedLlrTrace.Value.code("distance1", distance[s1], exactFractionalBits, false));
         into.add(FixedLlrTrace.Value.code("metric-exact", sign * (distance[s1] - distance[s0]), exactFractionalBits,
                 false));
+    }
+
+    /**
+     * Per point: two differences, two squares and their sum. Per bit: the two halves' minima, their difference and
+     * the metric stage. Tables: the quantized points.
+     */
+    @Override
+    DatapathCost frontCost() {
+        long m = distance.length;
+        return new DatapathCost(2 * m, 3 * m, 0, 2 * m * input.wordLength())
+                .plus(new DatapathCost(0, 1, m - 2, 0).plus(stage(spec.metric(), exactFractionalBits))
+                        .repeated(bitsPerSymbol));
     }
 
     @Override

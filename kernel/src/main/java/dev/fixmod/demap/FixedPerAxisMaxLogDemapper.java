@@ -1,13 +1,14 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
-import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.map.ConstellationRom;
+import dev.fixmod.map.DatapathCost;
 import java.util.List;
 
 /**
  * Per-dimension max-log in fixed point, for separable constellations (PAM, square and rectangular QAM). The axis
- * levels are quantized onto the input grid once; each bit then has a segment table (the doubled midpoints of its
+ * levels are the reference ROM's codes; each bit has a segment table (the doubled midpoints of its
  * bit-0 and bit-1 levels, and per segment the nearest level codes {@code c0}, {@code c1}). Per sample and bit: a binary
  * search of {@code 2y} in the table, then the exact integer
  * {@code D = ±(c0 − c1)·(2y − c0 − c1) = ±((y − c1)² − (y − c0)²)} with twice the input's fractional bits, fitted by
@@ -28,17 +29,15 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     private final long[][] oneCode;
     private final int exactFractionalBits;
 
-    public FixedPerAxisMaxLogDemapper(Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
-        super(SoftAlgorithm.MAX_LOG_PER_AXIS, constellation, options, spec);
+    public FixedPerAxisMaxLogDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
+        super(SoftAlgorithm.MAX_LOG_PER_AXIS, reference, options, spec);
         AxisLayout layout = AxisSegments.requireSeparable(constellation, options, SoftAlgorithm.MAX_LOG_PER_AXIS);
         AxisSegments.BitPlaces places = new AxisSegments.BitPlaces(layout);
-        long[][] codes = {
-            FixedLevels.quantize(layout.iLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis I"),
-            FixedLevels.quantize(layout.qLevels(), spec.input(), spec.constantRounding(), constellation.name() + " axis Q")};
+        long[][] codes = {FixedLevels.axisCodes(reference, layout, false), FixedLevels.axisCodes(reference, layout, true)};
         int[] axisBits = {layout.iBits().length, layout.qBits().length};
         int sign = options.sign().factor();
         this.axis = places.axis;
-        this.exactFractionalBits = 2 * spec.input().fractionalBits();
+        this.exactFractionalBits = 2 * input.fractionalBits();
         this.boundaries = new long[bitsPerSymbol][];
         this.slope = new long[bitsPerSymbol][];
         this.offset = new long[bitsPerSymbol][];
@@ -79,15 +78,15 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     @Override
     long metric(int b, long iCode, long qCode, OverflowCounter metric) {
         long twoY = 2 * (axis[b] == 0 ? iCode : qCode);
-        int s = AxisSegments.find(boundaries[b], twoY);
+        int s = AxisSegments.segmentOfCode(boundaries[b], twoY);
         return spec.metric().fit(slope[b][s] * (twoY - offset[b][s]), exactFractionalBits, metric);
     }
 
     @Override
     void describe(int b, long iCode, long qCode, List<FixedLlrTrace.Value> into) {
         long y = axis[b] == 0 ? iCode : qCode;
-        int s = AxisSegments.find(boundaries[b], 2 * y);
-        int frac = spec.input().fractionalBits();
+        int s = AxisSegments.segmentOfCode(boundaries[b], 2 * y);
+        int frac = input.fractionalBits();
         into.add(FixedLlrTrace.Value.code("y", y, frac, false));
         into.add(FixedLlrTrace.Value.index("segment", s));
         into.add(FixedLlrTrace.Value.code("level0", zeroCode[b][s], frac, false));
@@ -96,13 +95,30 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
                 false));
     }
 
+    /**
+     * Per bit: the binary search, {@code 2y − (c0 + c1)} (one addition), the product by {@code c0 − c1} (not
+     * counted when every segment's slope is 0 or a power of two: a shift) and the metric stage. Tables per bit:
+     * boundaries, slopes and offsets, each one bit wider than an input code.
+     */
+    @Override
+    DatapathCost frontCost() {
+        DatapathCost total = DatapathCost.ZERO;
+        int entry = input.wordLength() + 1;
+        for (int b = 0; b < bitsPerSymbol; b++) {
+            int n = slope[b].length;
+            boolean shiftsOnly = true;
+            for (long s : slope[b]) {
+                shiftsOnly &= Long.bitCount(Math.abs(s)) <= 1;
+            }
+            total = total.plus(new DatapathCost(shiftsOnly ? 0 : 1, 1, AxisSegments.searchComparisons(n - 1),
+                    (long) entry * (n - 1 + 2 * n)))
+                    .plus(stage(spec.metric(), exactFractionalBits));
+        }
+        return total;
+    }
+
     @Override
     String axisOf(int b) {
         return axis[b] == 0 ? "I" : "Q";
-    }
-
-    /** The number of segments of bit {@code b}'s table. */
-    public int segments(int b) {
-        return slope[b].length;
     }
 }

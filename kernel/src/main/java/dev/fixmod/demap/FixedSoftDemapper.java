@@ -5,6 +5,10 @@ import dev.fixmod.fixed.FixedPoint;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
+import dev.fixmod.fixed.Quantizer;
+import dev.fixmod.fixed.Rounding;
+import dev.fixmod.map.ConstellationRom;
+import dev.fixmod.map.DatapathCost;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -12,8 +16,13 @@ import java.util.Objects;
 /**
  * A bit-exact fixed-point LLR datapath: integer I and Q codes in, one integer LLR code per label bit out, through the
  * stages of a {@link FixedLlrSpec} (metric → scale → output). The per-sample methods are integer-only, as an FPGA or
- * MCU would compute them; every constant (levels, segment tables, fold thresholds, K) is quantized once at
- * construction. A test inspects their bytecode to keep it so.
+ * MCU would compute them; every constant (segment tables, fold constants, K) is derived once at construction. A test
+ * inspects their bytecode to keep it so.
+ *
+ * <p>The reference points are a {@link ConstellationRom}: the same quantized constellation the fixed mapper emits and
+ * the fixed slicers decide against, so an LLR's zero crossing lies exactly on the slicer's threshold. The input codes
+ * share the ROM's format (at most {@value #MAX_INPUT_WORD_LENGTH} bits). Noise power and the levels' half-spacing A are
+ * in the units of those codes' real values, i.e. of the ROM's scaled constellation.
  *
  * <p>The {@link LlrSign} is applied to the exact metric before any rounding. Each stage counts its overflow events on
  * its own {@link OverflowCounter} ({@code llr-metric}, {@code llr-scale}, {@code llr-output}); they accumulate across
@@ -28,8 +37,12 @@ public abstract class FixedSoftDemapper {
     public static final String METRIC_STAGE = "llr-metric";
     public static final String SCALE_STAGE = "llr-scale";
     public static final String OUTPUT_STAGE = "llr-output";
+    /** The widest input word: squared distances (and their sums and differences) stay exact in 64 bits. */
+    public static final int MAX_INPUT_WORD_LENGTH = 30;
 
     private final SoftAlgorithm algorithm;
+    final ConstellationRom reference;
+    final QFormat input;
     final Constellation constellation;
     final LlrOptions options;
     final FixedLlrSpec spec;
@@ -43,9 +56,20 @@ public abstract class FixedSoftDemapper {
     private final OverflowCounter scaleCounter = new OverflowCounter(SCALE_STAGE);
     private final OverflowCounter outputCounter = new OverflowCounter(OUTPUT_STAGE);
 
-    FixedSoftDemapper(SoftAlgorithm algorithm, Constellation constellation, LlrOptions options, FixedLlrSpec spec) {
+    FixedSoftDemapper(SoftAlgorithm algorithm, ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
         this.algorithm = algorithm;
-        this.constellation = Objects.requireNonNull(constellation, "constellation");
+        this.reference = Objects.requireNonNull(reference, "reference ROM");
+        this.input = reference.format();
+        if (input.wordLength() > MAX_INPUT_WORD_LENGTH) {
+            throw new IllegalArgumentException("input format " + input + " has " + input.wordLength() + " bits; the"
+                    + " LLR datapaths take at most " + MAX_INPUT_WORD_LENGTH + " (squared distances must be exact in 64"
+                    + " bits)");
+        }
+        this.constellation = FixedLevels.effective(reference);
+        if (constellation.alternatesQuarterTurn()) {
+            throw new IllegalArgumentException(constellation.name() + " turns odd symbols by +90°: derotate them by"
+                    + " −90° before demapping and use the plain two-point constellation");
+        }
         this.options = Objects.requireNonNull(options, "options");
         this.spec = Objects.requireNonNull(spec, "spec");
         this.bitsPerSymbol = constellation.bitsPerSymbol();
@@ -85,15 +109,15 @@ public abstract class FixedSoftDemapper {
      * @throws IllegalArgumentException if the algorithm has no fixed-point datapath, does not apply to the
      *                                  constellation, or the formats are too narrow for it
      */
-    public static FixedSoftDemapper create(SoftAlgorithm algorithm, Constellation constellation, LlrOptions options,
+    public static FixedSoftDemapper create(SoftAlgorithm algorithm, ConstellationRom reference, LlrOptions options,
                                            FixedLlrSpec spec) {
         switch (algorithm) {
             case MAX_LOG:
-                return new FixedMaxLogDemapper(constellation, options, spec);
+                return new FixedMaxLogDemapper(reference, options, spec);
             case MAX_LOG_PER_AXIS:
-                return new FixedPerAxisMaxLogDemapper(constellation, options, spec);
+                return new FixedPerAxisMaxLogDemapper(reference, options, spec);
             case FOLDED_LINEAR:
-                return new FixedFoldedLinearDemapper(constellation, options, spec);
+                return new FixedFoldedLinearDemapper(reference, options, spec);
             case LOG_MAP:
             default:
                 FixedLevels.requireFixedAlgorithm(algorithm);
@@ -105,6 +129,17 @@ public abstract class FixedSoftDemapper {
         return algorithm;
     }
 
+    /** The reference points and input format. */
+    public final ConstellationRom reference() {
+        return reference;
+    }
+
+    /** The format of the I and Q codes: the ROM's. */
+    public final QFormat inputFormat() {
+        return input;
+    }
+
+    /** The constellation in the units of the input codes (the ROM's constellation times its scale). */
     public final Constellation constellation() {
         return constellation;
     }
@@ -142,6 +177,35 @@ public abstract class FixedSoftDemapper {
         return List.of(metricCounter, scaleCounter, outputCounter);
     }
 
+    /**
+     * The operations of one sample through this datapath, in the units of {@link DatapathCost}: the metric front end
+     * (see each datapath), then per bit the multiplication by K and the scale and output stages. A stage costs one
+     * addition when it drops fractional bits with a rounding other than {@code floor}, and two comparisons unless it
+     * wraps. Table bits include K. The sign is free: hardware multiplies by −K instead.
+     */
+    public final DatapathCost cost() {
+        DatapathCost perBit;
+        long kBits = 0;
+        if (scaled) {
+            perBit = new DatapathCost(1, 0, 0, 0)
+                    .plus(stage(spec.scale(), productFractionalBits))
+                    .plus(stage(spec.output(), spec.scale().format().fractionalBits()));
+            kBits = spec.scaleConstant().wordLength();
+        } else {
+            perBit = stage(spec.output(), productFractionalBits);
+        }
+        return frontCost().plus(perBit.repeated(bitsPerSymbol)).plus(new DatapathCost(0, 0, 0, kBits));
+    }
+
+    /** The cost of fitting a value with {@code fromFractionalBits} fractional bits through {@code stage}. */
+    static DatapathCost stage(Quantizer stage, int fromFractionalBits) {
+        boolean rounds = fromFractionalBits > stage.format().fractionalBits() && stage.rounding() != Rounding.FLOOR;
+        return new DatapathCost(0, rounds ? 1 : 0, stage.overflow() == Overflow.WRAP ? 0 : 2, 0);
+    }
+
+    /** The cost of {@link #prepare} and every bit's {@link #metric}, metric stage included, with their tables. */
+    abstract DatapathCost frontCost();
+
     /** Sets every stage's event count to 0. */
     public final void resetCounters() {
         metricCounter.reset();
@@ -154,7 +218,7 @@ public abstract class FixedSoftDemapper {
      *
      * @throws IllegalArgumentException if a code lies outside the input format or the output does not fit
      */
-    public final void llr(long iCode, long qCode, long[] llr, int llrOffset) {
+    public final void llr(int iCode, int qCode, int[] llr, int llrOffset) {
         if (llr == null || llrOffset < 0 || llrOffset > llr.length - bitsPerSymbol) {
             throw outputDoesNotFit(llr, llrOffset, 1);
         }
@@ -170,7 +234,7 @@ public abstract class FixedSoftDemapper {
      * @throws IllegalArgumentException if an array is missing or too short, or a code lies outside the input format;
      *                                  nothing is written then
      */
-    public final void llr(long[] i, long[] q, int offset, int count, long[] llr, int llrOffset) {
+    public final void llr(int[] i, int[] q, int offset, int count, int[] llr, int llrOffset) {
         Checks.notNull(i, "I code");
         Checks.range("I codes", i.length, offset, count);
         if (q == null && !oneDimensional) {
@@ -190,28 +254,27 @@ public abstract class FixedSoftDemapper {
             }
         }
         for (int n = 0; n < count; n++) {
-            compute(i[offset + n], q == null ? 0L : q[offset + n], llr, llrOffset + n * bitsPerSymbol);
+            compute(i[offset + n], q == null ? 0 : q[offset + n], llr, llrOffset + n * bitsPerSymbol);
         }
     }
 
-    private IllegalArgumentException outputDoesNotFit(long[] llr, int llrOffset, int count) {
+    private IllegalArgumentException outputDoesNotFit(int[] llr, int llrOffset, int count) {
         return new IllegalArgumentException("LLR output: " + count + " samples of " + bitsPerSymbol
                 + " LLR codes from offset " + llrOffset + " do not fit "
                 + (llr == null ? "a missing (null) array" : "an array of length " + llr.length));
     }
 
-    private void checkCode(String axis, int index, long code) {
-        QFormat f = spec.input();
-        if (code < f.minCode() || code > f.maxCode()) {
-            throw Checks.codeOutside(axis, index, code, f);
+    private void checkCode(String axis, int index, int code) {
+        if (code < input.minCode() || code > input.maxCode()) {
+            throw Checks.codeOutside(axis, index, code, input);
         }
     }
 
     /**
-     * The intermediate values of every bit for one sample; the LLRs are those {@link #llr(long, long, long[], int)}
+     * The intermediate values of every bit for one sample; the LLRs are those {@link #llr(int, int, int[], int)}
      * returns. Uses its own counters, so the datapath's counters are untouched. Allocates: for debugging only.
      */
-    public final FixedLlrTrace trace(long iCode, long qCode) {
+    public final FixedLlrTrace trace(int iCode, int qCode) {
         checkCode("I", 0, iCode);
         checkCode("Q", 0, qCode);
         OverflowCounter m = OverflowCounter.unnamed();
@@ -240,15 +303,16 @@ public abstract class FixedSoftDemapper {
                     : productFractionalBits, o);
             values.add(FixedLlrTrace.Value.code("output", out, spec.output().format().fractionalBits(),
                     o.events() > ob));
-            bits.add(new FixedLlrTrace.Bit(b, axisOf(b), values, out));
+            bits.add(new FixedLlrTrace.Bit(b, axisOf(b), values, (int) out));
         }
         return new FixedLlrTrace(iCode, qCode, bits);
     }
 
-    private void compute(long iCode, long qCode, long[] llr, int llrOffset) {
+    private void compute(int iCode, int qCode, int[] llr, int llrOffset) {
         prepare(iCode, qCode, metricCounter);
         for (int b = 0; b < bitsPerSymbol; b++) {
-            llr[llrOffset + b] = finish(metric(b, iCode, qCode, metricCounter));
+            // An output format has at most 32 signed bits: the code fits an int.
+            llr[llrOffset + b] = (int) finish(metric(b, iCode, qCode, metricCounter));
         }
     }
 
@@ -274,6 +338,6 @@ public abstract class FixedSoftDemapper {
 
     @Override
     public String toString() {
-        return "fixed " + algorithm + " datapath for " + constellation.name() + " (" + spec + ")";
+        return "fixed " + algorithm + " datapath for " + constellation.name() + " (input " + input + ", " + spec + ")";
     }
 }

@@ -2,6 +2,7 @@ package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.map.DatapathCost;
 
 /**
  * The folded-linear approximation used in hardware, for Gray-labelled PAM, square and rectangular QAM on equally
@@ -84,6 +85,16 @@ public final class FoldedLinearDemapper extends SoftDemapper {
         for (int b = 0; b < bitsPerSymbol; b++) {
             llr[llrOffset + b] = gain[b] * folds[axis[b]][fold[b]] + 0.0; // + 0.0 turns −0.0 into 0.0
         }
+    }
+
+    /**
+     * Per fold after the first: an absolute value and a subtraction (two additions); per bit: one multiplication by
+     * its gain. Tables: the fold constants and the gains.
+     */
+    @Override
+    public DatapathCost cost() {
+        long folds = Math.max(0, thresholds[0].length - 1) + Math.max(0, thresholds[1].length - 1);
+        return new DatapathCost(bitsPerSymbol, 2 * folds, 0, DOUBLE_BITS * (folds + bitsPerSymbol));
     }
 
     private static void fold(double y, double[] threshold, double[] out) {

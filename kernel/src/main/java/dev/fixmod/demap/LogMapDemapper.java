@@ -1,6 +1,7 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.map.DatapathCost;
 
 /**
  * Exact log-MAP: {@code L(b) = ln Σ_{s: b=0} e^{μ(s)} − ln Σ_{s: b=1} e^{μ(s)}} with
@@ -79,6 +80,26 @@ public final class LogMapDemapper extends SoftDemapper {
             }
             llr[llrOffset + b] = sign * l + 0.0; // + 0.0 turns −0.0 into 0.0
         }
+    }
+
+    /**
+     * Per point: two differences, two squares, a sum, the 1/N0 product, the prior, the running maximum and the
+     * offset from it. Per bit: the two halves' maxima, the range check, the two sums and one division (counted as a
+     * multiplication) before the logarithm. The path that shares the M exponentials is counted.
+     */
+    @Override
+    public DatapathCost cost() {
+        long m = metric.length;
+        long k = bitsPerSymbol;
+        long perPointAdds = 3 + (priors ? 1 : 0) + 1;
+        return new DatapathCost(3 * m + k, perPointAdds * m + k * (m - 2) + k, m + k * (m - 2) + 2 * k,
+                DOUBLE_BITS * (2 * m + (priors ? m : 0)));
+    }
+
+    /** M exponentials and one logarithm per bit, on the path that shares the exponentials. */
+    @Override
+    public long transcendentals() {
+        return metric.length + bitsPerSymbol;
     }
 
     private double max(int[] labels) {

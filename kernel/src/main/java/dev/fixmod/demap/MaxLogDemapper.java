@@ -1,6 +1,7 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.map.DatapathCost;
 
 /**
  * Exhaustive max-log: {@code L(b) = max_{s: b=0} μ(s) − max_{s: b=1} μ(s)} over all M symbols, with
@@ -17,6 +18,7 @@ public final class MaxLogDemapper extends SoftDemapper {
     private final boolean priors;
     private final double invN0;
     private final BitPartition partition;
+    /** Per point: the squared distance, or with priors the metric {@code ln p(s) − d/N0}. */
     private final double[] distance;
 
     public MaxLogDemapper(Constellation constellation, LlrOptions options) {
@@ -39,7 +41,8 @@ public final class MaxLogDemapper extends SoftDemapper {
         for (int s = 0; s < distance.length; s++) {
             double dr = yRe - re[s];
             double di = yIm - im[s];
-            distance[s] = dr * dr + di * di;
+            double d = dr * dr + di * di;
+            distance[s] = priors ? logPrior[s] - d * invN0 : d;
         }
         double sign = options.sign().factor();
         for (int b = 0; b < bitsPerSymbol; b++) {
@@ -64,8 +67,22 @@ public final class MaxLogDemapper extends SoftDemapper {
     private double bestMetric(int[] labels) {
         double max = Double.NEGATIVE_INFINITY;
         for (int s : labels) {
-            max = Math.max(max, logPrior[s] - distance[s] * invN0);
+            max = Math.max(max, distance[s]);
         }
         return max;
+    }
+
+    /**
+     * Per point: two differences, two squares and a sum (with priors also the 1/N0 product and the prior). Per bit:
+     * the two halves' minima, their difference and (without priors) the 1/N0 product.
+     */
+    @Override
+    public DatapathCost cost() {
+        long m = distance.length;
+        long k = bitsPerSymbol;
+        if (priors) {
+            return new DatapathCost(3 * m, 4 * m + k, k * (m - 2), DOUBLE_BITS * 3 * m);
+        }
+        return new DatapathCost(2 * m + k, 3 * m + k, k * (m - 2), DOUBLE_BITS * 2 * m);
     }
 }

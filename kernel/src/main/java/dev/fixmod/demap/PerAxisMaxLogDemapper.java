@@ -2,6 +2,7 @@ package dev.fixmod.demap;
 
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.map.DatapathCost;
 
 /**
  * Per-dimension max-log for separable constellations (PAM, square and rectangular QAM, any labeling of the axes).
@@ -67,13 +68,23 @@ public final class PerAxisMaxLogDemapper extends SoftDemapper {
     void compute(double yRe, double yIm, double[] llr, int llrOffset) {
         for (int b = 0; b < bitsPerSymbol; b++) {
             double twoY = 2 * (axis[b] == 0 ? yRe : yIm);
-            int s = AxisSegments.find(boundaries[b], twoY);
+            int s = AxisSegments.segmentOf(boundaries[b], twoY);
             llr[llrOffset + b] = gain[b][s] * (twoY - offset[b][s]) + 0.0; // + 0.0 turns −0.0 into 0.0
         }
     }
 
-    /** The number of segments of bit {@code b}'s closed form. */
-    public int segments(int b) {
-        return gain[b].length;
+    /**
+     * Per bit: the binary search over the segment boundaries, one subtraction and one multiplication; tables: the
+     * boundaries and two constants per segment.
+     */
+    @Override
+    public DatapathCost cost() {
+        DatapathCost total = DatapathCost.ZERO;
+        for (int b = 0; b < bitsPerSymbol; b++) {
+            int n = gain[b].length;
+            total = total.plus(new DatapathCost(1, 1, AxisSegments.searchComparisons(n - 1),
+                    (long) DOUBLE_BITS * (n - 1 + 2 * n)));
+        }
+        return total;
     }
 }

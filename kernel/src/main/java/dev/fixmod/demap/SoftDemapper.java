@@ -1,6 +1,7 @@
 package dev.fixmod.demap;
 
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.map.DatapathCost;
 import java.util.Objects;
 
 /**
@@ -26,6 +27,10 @@ public abstract class SoftDemapper {
         this.algorithm = algorithm;
         this.constellation = Objects.requireNonNull(constellation, "constellation");
         this.options = Objects.requireNonNull(options, "options");
+        if (constellation.alternatesQuarterTurn()) {
+            throw new IllegalArgumentException(constellation.name() + " turns odd symbols by +90°: derotate them by"
+                    + " −90° before demapping and use the plain two-point constellation");
+        }
         this.bitsPerSymbol = constellation.bitsPerSymbol();
         this.oneDimensional = isOneDimensional(constellation);
     }
@@ -66,6 +71,21 @@ public abstract class SoftDemapper {
     public final int bitsPerSymbol() {
         return bitsPerSymbol;
     }
+
+    /**
+     * The arithmetic of one received sample as this implementation performs it (constants counted as 64-bit table
+     * entries): an estimate for comparing algorithms, not a synthesis result. Exponentials and logarithms are not
+     * in it; see {@link #transcendentals}.
+     */
+    public abstract DatapathCost cost();
+
+    /** The number of {@code exp} and {@code log} evaluations per sample (0 except for log-MAP). */
+    public long transcendentals() {
+        return 0;
+    }
+
+    /** 64 bits per stored double constant. */
+    static final int DOUBLE_BITS = 64;
 
     /**
      * Writes the k LLRs of the sample {@code (re, im)} to {@code llr[llrOffset …]}.
