@@ -61,7 +61,7 @@ import dev.fixmod.map.Labels;
  *     <tr><td>8-PSK, points at n·45°</td><td>(0, 0)</td><td>0°, label 000</td><td>origin</td></tr>
  *     <tr><td>8-PSK, points at 22.5° + n·45°</td><td>(0.5, 0.5)</td><td>22.5°, label 000</td>
  *         <td>on the 45° boundary: larger-I side</td></tr>
- *     <tr><td>8-PSK, points at 22.5° + n·45°</td><td>(−1, −1) (most negative codes)</td><td>202.5°, label 110</td>
+ *     <tr><td>8-PSK, points at 22.5° + n·45°</td><td>(−1, −1) (most negative codes)</td><td>247.5°, label 111</td>
  *         <td>on the 225° boundary: larger-I side</td></tr>
  *   </tbody>
  * </table>
