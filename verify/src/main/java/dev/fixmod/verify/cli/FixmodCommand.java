@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
         subcommands = {
                 CommandLine.HelpCommand.class,
                 ConstellationCommand.class,
+                LossCommand.class,
                 CompareCommand.class,
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
