@@ -133,6 +133,7 @@ class LossCommandTest {
         String md = Files.readString(report.resolve("report.md"));
         // The README's reading of the example report must stay true.
         assertTrue(md.contains("### llr-word-length: choose 5"), md);
+        assertTrue(md.contains("### input-word-length: choose 6"), md);
         assertTrue(Files.readString(report.resolve("report.html")).contains("<svg"));
     }
 }
