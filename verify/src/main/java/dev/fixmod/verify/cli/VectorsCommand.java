@@ -27,7 +27,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code fixmod vectors}: generate, check and list golden vector sets. */
-@Command(name = "vectors",
+@Command(name = "vectors", mixinStandardHelpOptions = true,
         description = "Golden vector sets: stimulus and expected outputs per port, for RTL, C and Python testbenches.",
         subcommands = {VectorsCommand.Generate.class, VectorsCommand.Check.class, VectorsCommand.ListSets.class},
         footer = {"", "Exit status: 0 success, 1 differences found (check), 2 bad input or usage.",
@@ -154,12 +154,12 @@ public final class VectorsCommand implements Runnable {
             Path manifestFile = where.resolve(Manifest.FILE_NAME);
             if (Files.isRegularFile(manifestFile)) {
                 Manifest m = Manifest.read(readText(manifestFile), manifestFile.toString());
-                out.printf(Locale.ROOT, "%-32s %-20s %-6s %10s %12s  %s%n", "file", "port", "format", "count",
+                out.printf(Locale.ROOT, "%-32s %-20s %-13s %10s %12s  %s%n", "file", "port", "format", "count",
                         "bytes", "sha256");
                 for (Manifest.Entry e : m.files()) {
                     Path f = where.resolve(e.name());
                     String size = Files.isRegularFile(f) ? Long.toString(Files.size(f)) : "missing";
-                    out.printf(Locale.ROOT, "%-32s %-20s %-6s %10d %12s  %s%n", e.name(), e.port(), e.format(),
+                    out.printf(Locale.ROOT, "%-32s %-20s %-13s %10d %12s  %s%n", e.name(), e.port(), e.format(),
                             e.count(), size, e.sha256().substring(0, 16));
                 }
                 out.flush();

@@ -154,6 +154,10 @@ public final class SpecReader {
         if (node != null && node.isTextual()) {
             name = node.asText();
         } else if (node != null) {
+            if (!node.isObject()) {
+                throw error(p, "expected a constellation name such as \"nr:qam16\" or an object {\"name\": ...},"
+                        + " got " + kind(node));
+            }
             ObjectNode c = object(node, p);
             allow(c, p, "name", "labeling", "normalization", "phase-offset-degrees");
             name = string(c, p, "name", name);

@@ -17,6 +17,8 @@ import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -117,6 +119,10 @@ public final class VectorSetGenerator {
         try (OutputSet set = OutputSet.create(target, force)) {
             Manifest manifest = writeInto(set, options);
             set.commit();
+            // The work folder was private (rwx------); a finished set is an ordinary folder.
+            if (Files.getFileStore(target).supportsFileAttributeView(PosixFileAttributeView.class)) {
+                Files.setPosixFilePermissions(target, PosixFilePermissions.fromString("rwxr-xr-x"));
+            }
             return manifest;
         }
     }

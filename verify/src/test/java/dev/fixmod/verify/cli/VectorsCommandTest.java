@@ -120,6 +120,16 @@ class VectorsCommandTest {
     }
 
     @Test
+    void helpIsAvailableAtEachLevel() {
+        Run top = run("vectors", "--help");
+        assertEquals(0, top.status(), top.err());
+        assertTrue(top.out().contains("generate") && top.out().contains("check") && top.out().contains("list"));
+        Run gen = run("vectors", "generate", "--help");
+        assertEquals(0, gen.status(), gen.err());
+        assertTrue(gen.out().contains("--force") && gen.out().contains("--threads"), gen.out());
+    }
+
+    @Test
     void missingSpecAndMissingSetAreStatus2(@TempDir Path dir) {
         Run g = run("vectors", "generate", dir.resolve("nope.json").toString(), "-o", dir.resolve("x").toString());
         assertEquals(2, g.status());

@@ -50,7 +50,7 @@ class ConsumerTest {
     }
 
     @ParameterizedTest
-    @CsvSource({"llr, 1, true", "demapper-in, 2, true", "bits, 1, false", "mapper-out, 2, true", "hard, 1, false"})
+    @CsvSource({"llr, 1, true", "demapper-in, 2, true", "bits, 1, false"})
     void aCProgramReadsTheHeaderAndTheBinaryAndRecomputesTheManifestChecksum(String port, int bytes, boolean signed)
             throws IOException {
         Path gcc = ExternalProgram.require("the C consumer check", "gcc", "cc");

@@ -105,6 +105,7 @@ class SpecReaderTest {
             {"demapper": {"llr-sign": "negative"}}                      | s.json:1:15: demapper.llr-sign: unknown LLR sign 'negative'; expected one of zero-positive, one-positive
             {"constellation": {"name": "qam17"}}                        | s.json:1:20: constellation.name:
             {"constellation": "nr:qam17"}                               | s.json:1:2: constellation:
+            {"constellation": 16}                                       | s.json:1:2: constellation: expected a constellation name such as "nr:qam16" or an object {"name": ...}, got the number 16
             {"constellation": "pi2bpsk"}                                | s.json:1:2: constellation: 'pi2bpsk' turns odd symbols by 90 degrees
             {"constellation": {"name": "qam16", "labeling": "spiral"}}  | constellation.labeling: unknown labeling 'spiral'
             {"constellation": {"normalization": "unit"}}                | constellation.normalization: unknown normalization 'unit'; expected one of none, unit-energy
