@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set nr-qam16, port demapper-in (stimulus)
- * nr_qam16_demapper_in: 469 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * nr_qam16_demapper_in: 461 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] I: Q2.9 (signed, 12-bit word, 9 fractional bits, range [-4, 3.998046875], LSB 2^-9)
  *   [1] Q: Q2.9 (signed, 12-bit word, 9 fractional bits, range [-4, 3.998046875], LSB 2^-9)
  */
@@ -9,7 +9,7 @@
 
 #include <stdint.h>
 
-#define NR_QAM16_DEMAPPER_IN_ROWS 469
+#define NR_QAM16_DEMAPPER_IN_ROWS 461
 #define NR_QAM16_DEMAPPER_IN_FIELDS 2
 
 static const int16_t nr_qam16_demapper_in[NR_QAM16_DEMAPPER_IN_ROWS][NR_QAM16_DEMAPPER_IN_FIELDS] = {
@@ -447,15 +447,6 @@ static const int16_t nr_qam16_demapper_in[NR_QAM16_DEMAPPER_IN_ROWS][NR_QAM16_DE
     {162, 324},
     {162, 323},
     {162, 325},
-    {-324, -324},
-    {-324, 0},
-    {-324, 324},
-    {0, -324},
-    {0, 0},
-    {0, 324},
-    {324, -324},
-    {324, 0},
-    {324, 324},
     {324, 486},
     {0, 486},
     {486, 324},
@@ -482,6 +473,7 @@ static const int16_t nr_qam16_demapper_in[NR_QAM16_DEMAPPER_IN_ROWS][NR_QAM16_DE
     {-2048, 2047},
     {2047, -2048},
     {2047, 2047},
+    {0, 0},
 };
 
 #endif /* FIXMOD_NR_QAM16_DEMAPPER_IN_H */

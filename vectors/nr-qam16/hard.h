@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set nr-qam16, port hard (expected)
- * nr_qam16_hard: 469 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * nr_qam16_hard: 461 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] label: UQ4.0 (unsigned, 4-bit word, 0 fractional bits, range [0, 15], LSB 1)
  */
 #ifndef FIXMOD_NR_QAM16_HARD_H
@@ -8,7 +8,7 @@
 
 #include <stdint.h>
 
-#define NR_QAM16_HARD_ROWS 469
+#define NR_QAM16_HARD_ROWS 461
 #define NR_QAM16_HARD_FIELDS 1
 
 static const uint8_t nr_qam16_hard[NR_QAM16_HARD_ROWS][NR_QAM16_HARD_FIELDS] = {
@@ -446,15 +446,6 @@ static const uint8_t nr_qam16_hard[NR_QAM16_HARD_ROWS][NR_QAM16_HARD_FIELDS] = {
     {1u},
     {0u},
     {1u},
-    {12u},
-    {8u},
-    {9u},
-    {4u},
-    {0u},
-    {1u},
-    {6u},
-    {2u},
-    {3u},
     {3u},
     {1u},
     {3u},
@@ -481,6 +472,7 @@ static const uint8_t nr_qam16_hard[NR_QAM16_HARD_ROWS][NR_QAM16_HARD_FIELDS] = {
     {11u},
     {7u},
     {3u},
+    {0u},
 };
 
 #endif /* FIXMOD_NR_QAM16_HARD_H */

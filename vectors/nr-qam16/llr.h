@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set nr-qam16, port llr (expected)
- * nr_qam16_llr: 469 rows x 4 fields, int8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * nr_qam16_llr: 461 rows x 4 fields, int8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] llr0: Q5.0 (signed, 6-bit word, 0 fractional bits, range [-32, 31], LSB 1)
  *   [1] llr1: Q5.0 (signed, 6-bit word, 0 fractional bits, range [-32, 31], LSB 1)
  *   [2] llr2: Q5.0 (signed, 6-bit word, 0 fractional bits, range [-32, 31], LSB 1)
@@ -11,7 +11,7 @@
 
 #include <stdint.h>
 
-#define NR_QAM16_LLR_ROWS 469
+#define NR_QAM16_LLR_ROWS 461
 #define NR_QAM16_LLR_FIELDS 4
 
 static const int8_t nr_qam16_llr[NR_QAM16_LLR_ROWS][NR_QAM16_LLR_FIELDS] = {
@@ -449,15 +449,6 @@ static const int8_t nr_qam16_llr[NR_QAM16_LLR_ROWS][NR_QAM16_LLR_FIELDS] = {
     {6, 13, 6, 0},
     {6, 13, 6, 0},
     {6, 13, 6, 0},
-    {-13, -13, 0, 0},
-    {-13, 0, 0, 13},
-    {-13, 13, 0, 0},
-    {0, -13, 13, 0},
-    {0, 0, 13, 13},
-    {0, 13, 13, 0},
-    {13, -13, 0, 0},
-    {13, 0, 0, 13},
-    {13, 13, 0, 0},
     {13, 25, 0, -6},
     {0, 25, 13, -6},
     {25, 13, -6, 0},
@@ -484,6 +475,7 @@ static const int8_t nr_qam16_llr[NR_QAM16_LLR_ROWS][NR_QAM16_LLR_FIELDS] = {
     {-31, 31, -31, -31},
     {31, -31, -31, -31},
     {31, 31, -31, -31},
+    {0, 0, 13, 13},
 };
 
 #endif /* FIXMOD_NR_QAM16_LLR_H */

@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set nr-qam64, port demapper-in (stimulus)
- * nr_qam64_demapper_in: 661 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * nr_qam64_demapper_in: 613 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] I: Q2.9 (signed, 12-bit word, 9 fractional bits, range [-4, 3.998046875], LSB 2^-9)
  *   [1] Q: Q2.9 (signed, 12-bit word, 9 fractional bits, range [-4, 3.998046875], LSB 2^-9)
  */
@@ -9,7 +9,7 @@
 
 #include <stdint.h>
 
-#define NR_QAM64_DEMAPPER_IN_ROWS 661
+#define NR_QAM64_DEMAPPER_IN_ROWS 613
 #define NR_QAM64_DEMAPPER_IN_FIELDS 2
 
 static const int16_t nr_qam64_demapper_in[NR_QAM64_DEMAPPER_IN_ROWS][NR_QAM64_DEMAPPER_IN_FIELDS] = {
@@ -519,55 +519,6 @@ static const int16_t nr_qam64_demapper_in[NR_QAM64_DEMAPPER_IN_ROWS][NR_QAM64_DE
     {237, 474},
     {237, 473},
     {237, 475},
-    {-474, -474},
-    {-474, -316},
-    {-474, -158},
-    {-474, 0},
-    {-474, 158},
-    {-474, 316},
-    {-474, 474},
-    {-316, -474},
-    {-316, -316},
-    {-316, -158},
-    {-316, 0},
-    {-316, 158},
-    {-316, 316},
-    {-316, 474},
-    {-158, -474},
-    {-158, -316},
-    {-158, -158},
-    {-158, 0},
-    {-158, 158},
-    {-158, 316},
-    {-158, 474},
-    {0, -474},
-    {0, -316},
-    {0, -158},
-    {0, 0},
-    {0, 158},
-    {0, 316},
-    {0, 474},
-    {158, -474},
-    {158, -316},
-    {158, -158},
-    {158, 0},
-    {158, 158},
-    {158, 316},
-    {158, 474},
-    {316, -474},
-    {316, -316},
-    {316, -158},
-    {316, 0},
-    {316, 158},
-    {316, 316},
-    {316, 474},
-    {474, -474},
-    {474, -316},
-    {474, -158},
-    {474, 0},
-    {474, 158},
-    {474, 316},
-    {474, 474},
     {158, 79},
     {316, 79},
     {79, 158},
@@ -674,6 +625,7 @@ static const int16_t nr_qam64_demapper_in[NR_QAM64_DEMAPPER_IN_ROWS][NR_QAM64_DE
     {-2048, 2047},
     {2047, -2048},
     {2047, 2047},
+    {0, 0},
 };
 
 #endif /* FIXMOD_NR_QAM64_DEMAPPER_IN_H */

@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set nr-qam64, port hard (expected)
- * nr_qam64_hard: 661 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * nr_qam64_hard: 613 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] label: UQ6.0 (unsigned, 6-bit word, 0 fractional bits, range [0, 63], LSB 1)
  */
 #ifndef FIXMOD_NR_QAM64_HARD_H
@@ -8,7 +8,7 @@
 
 #include <stdint.h>
 
-#define NR_QAM64_HARD_ROWS 661
+#define NR_QAM64_HARD_ROWS 613
 #define NR_QAM64_HARD_FIELDS 1
 
 static const uint8_t nr_qam64_hard[NR_QAM64_HARD_ROWS][NR_QAM64_HARD_FIELDS] = {
@@ -518,55 +518,6 @@ static const uint8_t nr_qam64_hard[NR_QAM64_HARD_ROWS][NR_QAM64_HARD_FIELDS] = {
     {5u},
     {4u},
     {5u},
-    {60u},
-    {56u},
-    {57u},
-    {41u},
-    {40u},
-    {44u},
-    {45u},
-    {52u},
-    {48u},
-    {49u},
-    {33u},
-    {32u},
-    {36u},
-    {37u},
-    {54u},
-    {50u},
-    {51u},
-    {35u},
-    {34u},
-    {38u},
-    {39u},
-    {22u},
-    {18u},
-    {19u},
-    {3u},
-    {2u},
-    {6u},
-    {7u},
-    {20u},
-    {16u},
-    {17u},
-    {1u},
-    {0u},
-    {4u},
-    {5u},
-    {28u},
-    {24u},
-    {25u},
-    {9u},
-    {8u},
-    {12u},
-    {13u},
-    {30u},
-    {26u},
-    {27u},
-    {11u},
-    {10u},
-    {14u},
-    {15u},
     {1u},
     {9u},
     {2u},
@@ -673,6 +624,7 @@ static const uint8_t nr_qam64_hard[NR_QAM64_HARD_ROWS][NR_QAM64_HARD_FIELDS] = {
     {47u},
     {31u},
     {15u},
+    {3u},
 };
 
 #endif /* FIXMOD_NR_QAM64_HARD_H */

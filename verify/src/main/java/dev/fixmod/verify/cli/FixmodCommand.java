@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
         subcommands = {
                 CommandLine.HelpCommand.class,
                 ConstellationCommand.class,
+                LossCommand.class,
                 CompareCommand.class,
                 DemapCommand.class,
                 VectorsCommand.class

@@ -57,12 +57,6 @@ final class CornerCases {
                 add.add(pi[0], t - 1, CornerFlag.THRESHOLD_MINUS_LSB.mask());
                 add.add(pi[0], t + 1, CornerFlag.THRESHOLD_PLUS_LSB.mask());
             }
-            // Where an I and a Q threshold cross, a sample sits on both boundaries at once.
-            for (long ti : d.thresholdsI()) {
-                for (long tq : d.thresholdsQ()) {
-                    add.add(ti, tq, CornerFlag.ON_THRESHOLD.mask());
-                }
-            }
         }
         if (groups.contains(CornerGroup.TIES)) {
             addTies(pi, pq, add);
@@ -89,29 +83,9 @@ final class CornerCases {
         }
         List<Vector> vectors = new ArrayList<>(list.size());
         for (long[] v : list) {
-            int f = flags.get(v[0] + "," + v[1])[0];
-            // Whatever group chose it, an input equidistant from two or more nearest points is a tie.
-            vectors.add(new Vector(v[0], v[1], isTie(v[0], v[1], pi, pq) ? f | CornerFlag.TIE.mask() : f));
+            vectors.add(new Vector(v[0], v[1], flags.get(v[0] + "," + v[1])[0]));
         }
         return new Result(List.copyOf(vectors), List.copyOf(unreached));
-    }
-
-    /** Whether two or more reference points share the minimum squared distance from (i, q), in exact integers. */
-    static boolean isTie(long i, long q, long[] pi, long[] pq) {
-        long best = Long.MAX_VALUE;
-        int at = 0;
-        for (int p = 0; p < pi.length; p++) {
-            long di = i - pi[p];
-            long dq = q - pq[p];
-            long dist = di * di + dq * dq;
-            if (dist < best) {
-                best = dist;
-                at = 1;
-            } else if (dist == best) {
-                at++;
-            }
-        }
-        return at >= 2;
     }
 
     @FunctionalInterface

@@ -13,7 +13,7 @@ package dev.fixmod.verify.vectors;
  *     <tr><td>2</td><td>on-threshold</td><td>a coordinate exactly on a decision threshold</td></tr>
  *     <tr><td>3</td><td>threshold-minus-lsb</td><td>a coordinate one LSB below a threshold</td></tr>
  *     <tr><td>4</td><td>threshold-plus-lsb</td><td>a coordinate one LSB above a threshold</td></tr>
- *     <tr><td>5</td><td>tie</td><td>exactly equidistant from two or more nearest points (any constructed input)</td></tr>
+ *     <tr><td>5</td><td>tie</td><td>exactly equidistant from two nearest points</td></tr>
  *     <tr><td>6</td><td>min-code</td><td>a coordinate at the most negative code</td></tr>
  *     <tr><td>7</td><td>max-code</td><td>a coordinate at the most positive code</td></tr>
  *     <tr><td>8</td><td>both-axes-full-scale</td><td>both coordinates at the most negative or positive code</td></tr>
@@ -30,7 +30,7 @@ public enum CornerFlag {
     ON_THRESHOLD("on-threshold", "a coordinate exactly on a decision threshold of the slicer"),
     THRESHOLD_MINUS_LSB("threshold-minus-lsb", "a coordinate one LSB below a decision threshold"),
     THRESHOLD_PLUS_LSB("threshold-plus-lsb", "a coordinate one LSB above a decision threshold"),
-    TIE("tie", "exactly equidistant (in input codes) from two or more nearest reference points: the tie rule decides"),
+    TIE("tie", "exactly equidistant from two nearest constellation points (the tie rule decides)"),
     MIN_CODE("min-code", "a coordinate at the most negative code of the demapper input format"),
     MAX_CODE("max-code", "a coordinate at the most positive code of the demapper input format"),
     BOTH_AXES_FULL_SCALE("both-axes-full-scale", "both coordinates at the most negative or most positive code"),
