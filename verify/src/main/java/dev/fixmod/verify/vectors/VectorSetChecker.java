@@ -114,7 +114,8 @@ public final class VectorSetChecker {
         int fields = layout.path("fields").size();
         int digits = layout.path("hex-digits").asInt();
         String container = layout.path("storage").asText();
-        int bytes = container.endsWith("8_t") ? 1 : container.endsWith("16_t") ? 2 : 4;
+        String bitsOfType = container.replaceAll("[^0-9]", "");
+        int bytes = bitsOfType.isEmpty() ? 0 : Integer.parseInt(bitsOfType) / 8; // int16_t -> 2
         long size = Files.size(f);
         switch (e.format()) {
             case "binary" -> {
