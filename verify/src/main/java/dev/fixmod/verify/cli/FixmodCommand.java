@@ -15,6 +15,7 @@ import picocli.CommandLine.Command;
                 ConstellationCommand.class,
                 LossCommand.class,
                 CompareCommand.class,
+                DemoCommand.class,
                 DemapCommand.class,
                 VectorsCommand.class
         },
