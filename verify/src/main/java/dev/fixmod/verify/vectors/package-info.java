@@ -1,0 +1,6 @@
+/**
+ * Golden vector sets: the versioned specification, corner-case flags, the streamed generator of stimulus and
+ * expected outputs per port, the manifest and the checker that regenerates a set byte for byte.
+ * Depends on the kernel and on verify's noise and formats packages; only the command line depends on it.
+ */
+package dev.fixmod.verify.vectors;
