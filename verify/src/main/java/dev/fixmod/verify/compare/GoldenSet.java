@@ -1,5 +1,7 @@
 package dev.fixmod.verify.compare;
 
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.fixmod.fixed.QFormat;
@@ -55,9 +57,11 @@ public final class GoldenSet {
         }
         JsonNode root;
         try {
-            root = new ObjectMapper().readTree(manifest.toFile());
+            root = new ObjectMapper().enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+                    .readTree(manifest.toFile());
         } catch (IOException e) {
-            throw new IllegalArgumentException(manifest + ": not valid JSON: " + e.getMessage());
+            throw new IllegalArgumentException(manifest + ": not valid JSON: " + (e instanceof JsonProcessingException j
+                    ? j.getOriginalMessage() : e.getMessage()).split("\n", 2)[0]);
         }
         if (root == null || !SCHEMA.equals(root.path("schema").asText())) {
             throw new IllegalArgumentException(manifest + ": schema: expected \"" + SCHEMA + "\"");
@@ -132,7 +136,7 @@ public final class GoldenSet {
                 List<QFormat> formats = new ArrayList<>();
                 for (JsonNode field : fields) {
                     names.add(field.path("name").asText());
-                    formats.add(QFormat.parse(field.path("format").asText()));
+                    formats.add(QFormat.parse(field.path(field.has("q-format") ? "q-format" : "format").asText()));
                 }
                 return WordLayout.of(names, formats);
             }

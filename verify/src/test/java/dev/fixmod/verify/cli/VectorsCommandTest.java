@@ -113,7 +113,7 @@ class VectorsCommandTest {
         Run g = run("vectors", "generate", spec(dir, text).toString(), "-o", set.toString());
         assertEquals(2, g.status());
         assertEquals(1, g.err().lines().count(), g.err());
-        assertTrue(g.err().startsWith("fixmod generate: " + dir.resolve("spec.json") + ":"), g.err());
+        assertTrue(g.err().startsWith("fixmod vectors generate: " + dir.resolve("spec.json") + ":"), g.err());
         assertFalse(g.err().contains("Exception"), g.err());
         assertFalse(Files.exists(set));
         assertNoLeftovers(dir);
