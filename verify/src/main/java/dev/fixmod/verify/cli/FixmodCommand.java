@@ -85,7 +85,7 @@ public final class FixmodCommand implements Runnable {
         }
         m.appendTail(sb);
         String line = sb.toString().replaceAll("\\s*\\R\\s*", " ").strip();
-        return line.length() <= MAX_MESSAGE ? line : line.substring(0, MAX_MESSAGE) + "...";
+        return line.length() <= MAX_MESSAGE ? line : line.substring(0, MAX_MESSAGE - 3) + "...";
     }
 
     private static int fail(CommandLine c, String message, int status) {
