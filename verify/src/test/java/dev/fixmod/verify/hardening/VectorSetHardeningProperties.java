@@ -99,9 +99,11 @@ class VectorSetHardeningProperties {
     /** A layout field whose format is not a Q format that fits a word: compare refuses; check reports or refuses. */
     @Property(tries = 60)
     void wrongLayoutsAreRejected(@ForAll("badFormat") String format, @ForAll Reader reader) {
-        int at = MANIFEST.indexOf("\"q-format\" : ", MANIFEST.indexOf(nameField(LLR_HEX)));
+        // The layout lists {"name", ..., "format"} per field; the entry's own "format" (hex) precedes "fields".
+        int at = MANIFEST.indexOf("\"format\" : ", MANIFEST.indexOf("\"fields\" : ",
+                MANIFEST.indexOf(nameField(LLR_HEX))));
         int end = MANIFEST.indexOf(',', at);
-        String text = MANIFEST.substring(0, at) + "\"q-format\" : " + format + MANIFEST.substring(end);
+        String text = MANIFEST.substring(0, at) + "\"format\" : " + format + MANIFEST.substring(end);
         check("vector-set wrong layouts", text.getBytes(StandardCharsets.UTF_8), reader, reader == Reader.COMPARE);
     }
 
