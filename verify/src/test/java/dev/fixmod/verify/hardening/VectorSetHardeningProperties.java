@@ -40,7 +40,7 @@ class VectorSetHardeningProperties {
             "a/../../victim.hex", "sub/llr.hex", "..\\..\\victim.hex", "C:\\victim.hex", ".hidden", "~/victim.hex",
             "%2e%2e/victim.hex", "llr.hex/", "manifest.json", "llr.hex\u0000.txt", "\u2025/victim.hex");
 
-    static final List<String> HUGE_COUNTS = List.of("1000000000000", "9223372036854775807", "9223372036854775808",
+    static final List<String> HUGE_COUNTS = List.of("1000000000", "999999999", "1000000000000", "9223372036854775807", "9223372036854775808",
             "99999999999999999999", "1e400", "-1", "NaN", "1.5", "null", "\"12\"");
 
     enum Reader {
@@ -70,7 +70,8 @@ class VectorSetHardeningProperties {
     /**
      * Counts are claims, not allocations: a file's count of 10^12 is a difference from the files ({@code check}
      * exits 1) or not used ({@code compare} and {@code list} stream the files); it never allocates or hangs. The
-     * canonical specification's count must be a number of at most 10^9 ({@code check} regenerates from it).
+     * canonical specification's count must be a number of at most 10^9 that agrees with the groups and fits the files
+     * ({@code check} regenerates from it).
      */
     @Property(tries = 80)
     void hugeCountsAreNeverAllocated(@ForAll("compared") int entry, @ForAll("hugeCount") String count,
@@ -81,6 +82,21 @@ class VectorSetHardeningProperties {
         String text = MANIFEST.substring(0, at) + count + MANIFEST.substring(end);
         check("vector-set huge counts", text.getBytes(StandardCharsets.UTF_8), reader,
                 inSpec && reader == Reader.CHECK);
+    }
+
+    /**
+     * Every count of the manifest edited to agree (spec, groups), so only the files' sizes betray it: {@code check}
+     * must refuse at once rather than regenerate millions of vectors.
+     */
+    @Property(tries = 6)
+    void consistentlyEditedCountsAreNotRegenerated(@ForAll("editedCount") String count) {
+        int from = MANIFEST.indexOf("\"spec\" : ");
+        int at = MANIFEST.indexOf("\"count\" : ", from) + "\"count\" : ".length();
+        int end = MANIFEST.indexOf(',', at);
+        String text = (MANIFEST.substring(0, at) + count + MANIFEST.substring(end))
+                .replaceAll("\"data\" : \\d+", "\"data\" : " + count)
+                .replaceAll("\"data-per-level\" : \\d+", "\"data-per-level\" : " + count);
+        check("vector-set consistently edited counts", text.getBytes(StandardCharsets.UTF_8), Reader.CHECK, true);
     }
 
     @Property(tries = 40)
@@ -162,6 +178,11 @@ class VectorSetHardeningProperties {
     @Provide
     Arbitrary<String> hugeCount() {
         return Arbitraries.of(HUGE_COUNTS);
+    }
+
+    @Provide
+    Arbitrary<String> editedCount() {
+        return Arbitraries.of("1000000000", "100000000", "10000000");
     }
 
     @Provide
