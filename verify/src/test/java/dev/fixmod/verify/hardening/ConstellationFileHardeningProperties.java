@@ -34,44 +34,44 @@ class ConstellationFileHardeningProperties {
     static final List<String> NOT_A_LABEL = List.of("9223372036854775808", "99999999999999999999", "-1", "1.5",
             "4096", "2147483648", "1e3", "-0.0");
 
-    @Property(tries = 120)
+    @Property(tries = 50)
     void randomBytesAreRejected(@ForAll("bytes") byte[] bytes, @ForAll("extension") String extension) {
         check("constellation-file random bytes", bytes, extension, true);
     }
 
-    @Property(tries = 120)
+    @Property(tries = 50)
     void truncatedJsonIsRejected(@ForAll("jsonCut") int cut) {
         check("constellation-file truncated json", JSON.substring(0, cut).getBytes(StandardCharsets.UTF_8), ".json",
                 true);
     }
 
     /** A CSV cut inside its last data row may still be a valid (smaller) constellation; it must never crash. */
-    @Property(tries = 80)
+    @Property(tries = 30)
     void truncatedCsvIsRejectedOrValid(@ForAll("csvCut") int cut) {
         check("constellation-file truncated csv", CSV.substring(0, cut).getBytes(StandardCharsets.UTF_8), ".csv",
                 false);
     }
 
-    @Property(tries = 150)
+    @Property(tries = 60)
     void hostileJsonValuesAreRejected(@ForAll("point") int point, @ForAll("key") String key,
                                       @ForAll("neverValid") String token) {
         check("constellation-file hostile json values", replaceJson(point, key, token), ".json", true);
     }
 
-    @Property(tries = 100)
+    @Property(tries = 40)
     void hostileLabelsAreRejected(@ForAll("point") int point, @ForAll("notALabel") String token,
                                   @ForAll boolean csv) {
         byte[] file = csv ? replaceCsv(point, 0, token) : replaceJson(point, "label", token);
         check("constellation-file hostile labels", file, csv ? ".csv" : ".json", true);
     }
 
-    @Property(tries = 100)
+    @Property(tries = 40)
     void hostileCsvCellsAreRejected(@ForAll("point") int point, @ForAll("column") int column,
                                     @ForAll("neverValid") String token) {
         check("constellation-file hostile csv cells", replaceCsv(point, column, token), ".csv", true);
     }
 
-    @Property(tries = 60)
+    @Property(tries = 25)
     void duplicateKeysAreRejected(@ForAll("point") int point, @ForAll("key") String key) {
         String p = pointJson(CSV.lines().skip(1 + point).findFirst().orElseThrow());
         String twice = p.substring(0, p.length() - 1) + ", \"" + key + "\": 0}";

@@ -28,7 +28,7 @@ class DemapHardeningProperties {
             "../../escape", "/tmp/fixmod-escape", "half up", "x".repeat(100_000), "\u0000", "-",
             "qam1073741824", "psk0", "qam3");
 
-    @Property(tries = 200)
+    @Property(tries = 100)
     void hostileOptionValuesAreRejected(@ForAll("option") String option, @ForAll("hostile") String value) {
         List<String> args = new ArrayList<>(List.of("demap"));
         args.addAll(option.equals("-c") ? List.of() : List.of("-c", "qam16"));
@@ -42,7 +42,7 @@ class DemapHardeningProperties {
         Harness.assertRejected(o);
     }
 
-    @Property(tries = 30)
+    @Property(tries = 15)
     void contradictoryOrMissingArgumentsAreRejected(@ForAll("combination") List<String> extra) {
         List<String> args = new ArrayList<>(List.of("demap"));
         args.addAll(extra);

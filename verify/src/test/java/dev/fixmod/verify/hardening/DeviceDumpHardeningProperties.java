@@ -38,23 +38,23 @@ class DeviceDumpHardeningProperties {
     static final List<String> NEVER_A_HEX_WORD = List.of("7g1", "-12", "7c.1", "@10", "NaN", "1e40g", "\u00e9",
             "0x7c1!", "[[[", "7c1\u0000");
 
-    @Property(tries = 150)
+    @Property(tries = 60)
     void randomDumpsEndInADocumentedStatus(@ForAll("bytes") byte[] bytes, @ForAll Format format) {
         check("device-dump random bytes", bytes, format, false);
     }
 
-    @Property(tries = 60)
+    @Property(tries = 25)
     void truncatedDumpsEndInADocumentedStatus(@ForAll("fraction") double fraction, @ForAll Format format) {
         byte[] full = valid(format);
         check("device-dump truncated", Arrays.copyOf(full, (int) (full.length * fraction)), format, false);
     }
 
-    @Property(tries = 40)
+    @Property(tries = 15)
     void aCutBinaryWordIsRejected(@ForAll("oddLength") int length) {
         check("device-dump cut binary word", Arrays.copyOf(valid(Format.BIN), length), Format.BIN, true);
     }
 
-    @Property(tries = 80)
+    @Property(tries = 30)
     void strayHexIsRejected(@ForAll("line") int line, @ForAll("strayHex") String token) {
         List<String> lines = new ArrayList<>(GOLDEN_HEX.lines().toList());
         lines.set(line, token);
@@ -62,7 +62,7 @@ class DeviceDumpHardeningProperties {
                 Format.HEX, true);
     }
 
-    @Property(tries = 80)
+    @Property(tries = 30)
     void hostileCsvCodesAreRejected(@ForAll("line") int line, @ForAll boolean second, @ForAll("csvCode") String code) {
         List<String> lines = new ArrayList<>(GOLDEN_CSV.lines().toList());
         String[] cells = lines.get(1 + line).split(",");
@@ -73,7 +73,7 @@ class DeviceDumpHardeningProperties {
     }
 
     /** Words of the wrong width are counted as mismatches by design (exit 1), never an error or a crash. */
-    @Property(tries = 40)
+    @Property(tries = 15)
     void wrongWidthsAreMismatches(@ForAll("line") int line, @ForAll("widthDigits") String digits) {
         List<String> lines = new ArrayList<>(GOLDEN_HEX.lines().toList());
         lines.set(line, digits);
@@ -82,7 +82,7 @@ class DeviceDumpHardeningProperties {
         assertEquals(1, o.status(), o::describe);
     }
 
-    @Property(tries = 150)
+    @Property(tries = 60)
     void hugeNumbersInOptionsAreUsageErrorsOrSettings(@ForAll("numericOption") String[] option,
                                                       @ForAll("hugeNumber") String number) {
         Path sandbox = Harness.sandbox();

@@ -117,17 +117,17 @@ class LossSpecHardeningProperties {
         }
     }
 
-    @Property(tries = 40)
+    @Property(tries = 20)
     void randomBytesAreRejected(@ForAll("bytes") byte[] bytes) {
         check("loss-spec random bytes", bytes);
     }
 
-    @Property(tries = 40)
+    @Property(tries = 20)
     void truncationsAreRejected(@ForAll("cut") int cut) {
         check("loss-spec truncated", SPEC.substring(0, cut).getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 150)
+    @Property(tries = 75)
     void hostileValuesAreRejected(@ForAll("leaf") int leaf, @ForAll("hostile") String token) {
         String[] l = LEAVES.get(leaf);
         // an empty constellation object means every default (qam16), a valid choice
@@ -136,13 +136,13 @@ class LossSpecHardeningProperties {
                 .getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 30)
+    @Property(tries = 15)
     void unknownKeysAreRejected(@ForAll("objectStart") int at, @ForAll("unknownKey") String key) {
         check("loss-spec unknown keys", (SPEC.substring(0, at + 1) + "\"" + key + "\": 1, " + SPEC.substring(at + 1))
                 .getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 30)
+    @Property(tries = 15)
     void duplicateKeysAreRejected(@ForAll("leaf") int leaf) {
         String[] l = LEAVES.get(leaf);
         String text;
@@ -163,12 +163,12 @@ class LossSpecHardeningProperties {
                 + Harness.nestedArrays(depth) + "}").getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 40)
+    @Property(tries = 20)
     void hostileSweepsAreRejected(@ForAll("hostileSweep") String sweep) {
         check("loss-spec hostile sweeps", replaceSweep(sweep).getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 60)
+    @Property(tries = 30)
     void hostileSweepValuesAreRejected(@ForAll("swept") String parameter, @ForAll("hostileSweepValue") String value) {
         // 64, 1000, 2^31 and 1 are legal (if useless) LLR scales and back-offs in dB: every code saturates
         Assume.that(!((parameter.equals("llr-scale") || parameter.equals("back-off-db"))
@@ -188,7 +188,7 @@ class LossSpecHardeningProperties {
         check("loss-spec absurd work", text.getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 20)
+    @Property(tries = 10)
     void hostileArgumentsAreRejected(@ForAll("argument") List<String> args) {
         Path sandbox = Harness.sandbox();
         try {
@@ -209,7 +209,7 @@ class LossSpecHardeningProperties {
         }
     }
 
-    @Property(tries = 30)
+    @Property(tries = 15)
     void damagedPartialResultsAreRejected(@ForAll("damage") int damage, @ForAll("cut") int cut,
                                           @ForAll("bytes") byte[] bytes) {
         Path sandbox = Harness.sandbox();

@@ -47,18 +47,18 @@ class VectorSetHardeningProperties {
         CHECK, LIST, COMPARE
     }
 
-    @Property(tries = 60)
+    @Property(tries = 25)
     void randomBytesAreRejected(@ForAll("bytes") byte[] bytes, @ForAll Reader reader) {
         check("vector-set random bytes", bytes, reader, true);
     }
 
-    @Property(tries = 60)
+    @Property(tries = 25)
     void truncationsAreRejected(@ForAll("cut") int cut, @ForAll Reader reader) {
         check("vector-set truncated manifest", MANIFEST.substring(0, cut).getBytes(StandardCharsets.UTF_8), reader,
                 true);
     }
 
-    @Property(tries = 100)
+    @Property(tries = 40)
     void namesEscapingTheSetAreRejected(@ForAll("compared") int entry, @ForAll("escaping") String name,
                                         @ForAll Reader reader) {
         // compare reads only the port it is asked for; the other entries are the checker's and the lister's.
@@ -73,7 +73,7 @@ class VectorSetHardeningProperties {
      * canonical specification's count must be a number of at most 10^9 that agrees with the groups and fits the files
      * ({@code check} regenerates from it).
      */
-    @Property(tries = 80)
+    @Property(tries = 30)
     void hugeCountsAreNeverAllocated(@ForAll("compared") int entry, @ForAll("hugeCount") String count,
                                      @ForAll boolean inSpec, @ForAll Reader reader) {
         int from = inSpec ? MANIFEST.indexOf("\"spec\" : ") : MANIFEST.indexOf(nameField(entry));
@@ -99,21 +99,21 @@ class VectorSetHardeningProperties {
         check("vector-set consistently edited counts", text.getBytes(StandardCharsets.UTF_8), Reader.CHECK, true);
     }
 
-    @Property(tries = 40)
+    @Property(tries = 15)
     void deepNestingIsRejected(@ForAll("nestable") String key, @ForAll Reader reader) {
         String text = MANIFEST.replaceFirst("\"" + key + "\" : ", "\"" + key + "\" : "
                 + Harness.nestedArrays(100_000) + ", \"x-" + key + "\" : ");
         check("vector-set deep nesting", text.getBytes(StandardCharsets.UTF_8), reader, true);
     }
 
-    @Property(tries = 40)
+    @Property(tries = 15)
     void duplicateKeysAreRejected(@ForAll("nestable") String key, @ForAll Reader reader) {
         String text = MANIFEST.replaceFirst("\\{", "{ \"" + key + "\" : 0,");
         check("vector-set duplicate keys", text.getBytes(StandardCharsets.UTF_8), reader, true);
     }
 
     /** A layout field whose format is not a Q format that fits a word: compare refuses; check reports or refuses. */
-    @Property(tries = 60)
+    @Property(tries = 25)
     void wrongLayoutsAreRejected(@ForAll("badFormat") String format, @ForAll Reader reader) {
         // The layout lists {"name", ..., "format"} per field; the entry's own "format" (hex) precedes "fields".
         int at = MANIFEST.indexOf("\"format\" : ", MANIFEST.indexOf("\"fields\" : ",

@@ -60,17 +60,17 @@ class VectorSpecHardeningProperties {
         }
     }
 
-    @Property(tries = 100)
+    @Property(tries = 50)
     void randomBytesAreRejected(@ForAll("bytes") byte[] bytes) {
         check("vector-spec random bytes", bytes);
     }
 
-    @Property(tries = 100)
+    @Property(tries = 50)
     void truncationsAreRejected(@ForAll("cut") int cut) {
         check("vector-spec truncated", SPEC.substring(0, cut).getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 200)
+    @Property(tries = 100)
     void hostileValuesAreRejected(@ForAll("leaf") int leaf, @ForAll("hostile") String token) {
         String[] l = LEAVES.get(leaf);
         // -1 dB and 1.5 dB are fine operating points; everywhere else these two are out of range or not integers
@@ -81,7 +81,7 @@ class VectorSpecHardeningProperties {
         check("vector-spec hostile values", text.getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 60)
+    @Property(tries = 30)
     void duplicateKeysAreRejected(@ForAll("leaf") int leaf) {
         String[] l = LEAVES.get(leaf);
         String text;
@@ -96,7 +96,7 @@ class VectorSpecHardeningProperties {
         check("vector-spec duplicate keys", text.getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 20)
+    @Property(tries = 10)
     void deepNestingIsRejected(@ForAll("depth") int depth) {
         check("vector-spec deep nesting", ("{\"constellation\": \"pam4\", \"description\": "
                 + Harness.nestedArrays(depth) + "}").getBytes(StandardCharsets.UTF_8));
