@@ -16,7 +16,10 @@ import picocli.CommandLine.Option;
                 + " recommended word lengths, and the comparison of a bundled cycle model of the device (and of a"
                 + " deliberately faulty build) against the vectors; then prints a summary with the paths to open.",
                 "An existing folder is replaced only if it holds a previous demo (or is empty)."},
-        footer = {"", "Example: fixmod demo -o /tmp/fixmod-demo",
+        footer = {"", "Examples:",
+                "  fixmod demo",
+                "  fixmod demo -o /tmp/fixmod-demo --threads 1",
+                "",
                 "Exit status: 0 success (the faulty build's disagreement is expected), 2 bad usage."})
 public final class DemoCommand implements Callable<Integer> {
     @CommandLine.Spec
@@ -26,16 +29,17 @@ public final class DemoCommand implements Callable<Integer> {
             description = "The demo folder (default: ${DEFAULT-VALUE} in the working folder).")
     Path output;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores)."
-            + " The outputs do not depend on it.")
-    Integer threads;
+    /** 0 stands for "all cores", as in every other command's --threads. */
+    @Option(names = "--threads", paramLabel = "N", defaultValue = "0", description = "Worker threads (default:"
+            + " all cores). The outputs do not depend on it.")
+    int threads;
 
     @Override
     public Integer call() throws IOException {
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
-        if (n < 1 || n > 256) {
-            throw new UsageException("--threads must be from 1 to 256, got " + n);
+        if (threads < 0 || threads > 1024) {
+            throw new UsageException("--threads must be 0 (all cores) or 1 to 1024, got " + threads);
         }
+        int n = threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
         PrintWriter out = spec.commandLine().getOut();
         out.println("running the demo scenario into " + output + " (about half a minute)...");
         out.flush();
