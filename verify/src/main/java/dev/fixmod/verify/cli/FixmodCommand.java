@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 ConstellationCommand.class,
                 CompareCommand.class,
+                DemapCommand.class,
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
                 "Results are engineering models, not conformance certification; the governing standard's text decides."})
