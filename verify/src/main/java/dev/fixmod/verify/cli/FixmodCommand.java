@@ -15,6 +15,7 @@ import picocli.CommandLine.Command;
                 ConstellationCommand.class,
                 CompareCommand.class,
                 DemapCommand.class,
+                BenchCommand.class,
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
                 "Results are engineering models, not conformance certification; the governing standard's text decides."})

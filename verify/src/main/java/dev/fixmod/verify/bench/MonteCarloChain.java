@@ -1,0 +1,183 @@
+package dev.fixmod.verify.bench;
+
+import dev.fixmod.demap.FixedSoftDemapper;
+import dev.fixmod.demap.SoftAlgorithm;
+import dev.fixmod.demap.SoftDemapper;
+import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.fixed.QFormat;
+import dev.fixmod.map.FloatMapper;
+import dev.fixmod.verify.noise.Awgn;
+import dev.fixmod.verify.noise.Gaussian;
+import dev.fixmod.verify.noise.Philox4x32;
+import dev.fixmod.verify.noise.StreamKey;
+import dev.fixmod.verify.theory.LlrHistogram;
+
+/**
+ * The Monte Carlo chain of a quantization-loss measurement, composed from the kernel and verify APIs for benchmarking:
+ * per block of symbols, uniform labels from a counter-based stream, the float mapper, complex AWGN (ziggurat), the
+ * receiver's quantizer ({@link Workload#INPUT}), the fixed-point LLR datapath on the codes and the float demapper on
+ * the unquantized samples, then per bit the hard-decision errors of both and their GMI statistics. Every random
+ * number is addressed by symbol index, so blocks may be run in any order or on any thread.
+ *
+ * <p>GMI accounting costs no logarithm per bit: the fixed codes go into an {@link LlrHistogram} (exact), the float
+ * LLRs into a histogram of {@link #FLOAT_BINS_PER_NAT} bins per nat, clamped at ±{@link #FLOAT_CLAMP} nats (an
+ * approximation: the penalty ln(1 + e^−x) has slope at most 1, so each sample's term moves by at most half a bin,
+ * 1/128 nat, and by far less on average). The logarithms are taken once per bin when the GMI is read.
+ *
+ * <p>Not thread-safe: one chain per thread; the counts of several chains add.
+ */
+final class MonteCarloChain {
+    static final int FLOAT_BINS_PER_NAT = 64;
+    static final int FLOAT_CLAMP = 64;
+    private static final int FLOAT_WIDTH = 2 * FLOAT_CLAMP * FLOAT_BINS_PER_NAT + 1;
+    private static final double LN2 = StrictMath.log(2.0);
+
+    private final Workload w;
+    private final int block;
+    private final int k;
+    private final int mask;
+    private final FloatMapper mapper;
+    private final Awgn awgn;
+    private final SoftDemapper floatDemapper;
+    private final FixedSoftDemapper fixedDemapper;
+    private final StreamKey labelKey = StreamKey.of(Workload.SEED, 11);
+    private final StreamKey noiseKey = StreamKey.of(Workload.SEED, 12);
+    private final OverflowCounter clip = new OverflowCounter("adc");
+
+    private final int[] labels;
+    private final double[] re;
+    private final double[] im;
+    private final double[] noiseI;
+    private final double[] noiseQ;
+    private final int[] iCodes;
+    private final int[] qCodes;
+    private final byte[] bits;
+    private final int[] codes;
+    private final double[] llr;
+
+    private final LlrHistogram fixedHistogram;
+    private final long[] floatCounts;
+    private long fixedBitErrors;
+    private long floatBitErrors;
+    private long symbols;
+
+    MonteCarloChain(Workload w, SoftAlgorithm algorithm, int block) {
+        this.w = w;
+        this.block = block;
+        this.k = w.bitsPerSymbol();
+        this.mask = w.constellation.size() - 1;
+        this.mapper = new FloatMapper(w.constellation);
+        this.awgn = new Awgn(w.options.n0(), Gaussian.ZIGGURAT);
+        this.floatDemapper = SoftDemapper.create(algorithm, w.constellation, w.options);
+        this.fixedDemapper = LlrBench.fixedDemapper(algorithm, w);
+        this.labels = new int[block];
+        this.re = new double[block];
+        this.im = new double[block];
+        this.noiseI = new double[block];
+        this.noiseQ = new double[block];
+        this.iCodes = new int[block];
+        this.qCodes = new int[block];
+        this.bits = new byte[block * k];
+        this.codes = new int[block * k];
+        this.llr = new double[block * k];
+        QFormat out = fixedDemapper.spec().output().format();
+        this.fixedHistogram = new LlrHistogram(k, (int) out.minCode(), (int) out.maxCode());
+        this.floatCounts = new long[k * 2 * FLOAT_WIDTH];
+    }
+
+    /** Runs symbols {@code firstSymbol … firstSymbol + block − 1}. */
+    void run(long firstSymbol) {
+        Philox4x32.fillWords(labels, 0, block, labelKey, firstSymbol);
+        for (int n = 0; n < block; n++) {
+            labels[n] &= mask;
+        }
+        mapper.mapLabels(labels, 0, block, firstSymbol, re, im, 0);
+        awgn.fill(noiseI, 0, noiseQ, 0, block, noiseKey, firstSymbol);
+        for (int n = 0; n < block; n++) {
+            re[n] += noiseI[n];
+            im[n] += noiseQ[n];
+            iCodes[n] = (int) Workload.INPUT.quantize(re[n], clip);
+            qCodes[n] = (int) Workload.INPUT.quantize(im[n], clip);
+        }
+        for (int n = 0; n < block; n++) {
+            int label = labels[n];
+            for (int b = 0; b < k; b++) {
+                bits[n * k + b] = (byte) ((label >>> (k - 1 - b)) & 1);
+            }
+        }
+        fixedDemapper.llr(iCodes, qCodes, 0, block, codes, 0);
+        floatDemapper.llr(re, im, 0, block, llr, 0);
+        fixedHistogram.add(codes, 0, bits, 0, block * k);
+        long fixedErrors = 0;
+        long floatErrors = 0;
+        for (int n = 0; n < block; n++) {
+            for (int b = 0; b < k; b++) {
+                int at = n * k + b;
+                int bit = bits[at];
+                // A decision of 1 when the LLR is negative; 0 (a tie) decides 0.
+                fixedErrors += bit ^ (codes[at] >>> 31);
+                double l = llr[at];
+                floatErrors += bit ^ (l < 0 ? 1 : 0);
+                double scaled = Math.max(-FLOAT_CLAMP, Math.min(FLOAT_CLAMP, l)) * FLOAT_BINS_PER_NAT;
+                int bin = (int) Math.floor(scaled + 0.5) + FLOAT_CLAMP * FLOAT_BINS_PER_NAT;
+                floatCounts[(b * 2 + bit) * FLOAT_WIDTH + bin]++;
+            }
+        }
+        fixedBitErrors += fixedErrors;
+        floatBitErrors += floatErrors;
+        symbols += block;
+    }
+
+    long symbols() {
+        return symbols;
+    }
+
+    long fixedBitErrors() {
+        return fixedBitErrors;
+    }
+
+    long floatBitErrors() {
+        return floatBitErrors;
+    }
+
+    long adcClips() {
+        return clip.events();
+    }
+
+    LlrHistogram fixedHistogram() {
+        return fixedHistogram;
+    }
+
+    /** The GMI of the fixed codes in bits per symbol, each code read as code · LSB nats. */
+    double fixedGmi() {
+        return fixedHistogram.gmi(fixedDemapper.spec().output().format().lsb());
+    }
+
+    /** The GMI of the float LLRs in bits per symbol, from the binned counts (see the class comment). */
+    double floatGmi() {
+        double total = 0;
+        for (int b = 0; b < k; b++) {
+            double penalty = 0;
+            long n = 0;
+            for (int bit = 0; bit < 2; bit++) {
+                int row = (b * 2 + bit) * FLOAT_WIDTH;
+                for (int i = 0; i < FLOAT_WIDTH; i++) {
+                    long count = floatCounts[row + i];
+                    if (count != 0) {
+                        double l = (double) (i - FLOAT_CLAMP * FLOAT_BINS_PER_NAT) / FLOAT_BINS_PER_NAT;
+                        double x = bit == 0 ? -l : l;
+                        penalty += count * (x > 0 ? x + StrictMath.log1p(StrictMath.exp(-x))
+                                : StrictMath.log1p(StrictMath.exp(x)));
+                        n += count;
+                    }
+                }
+            }
+            total += 1 - penalty / n / LN2;
+        }
+        return total;
+    }
+
+    Workload workload() {
+        return w;
+    }
+}
