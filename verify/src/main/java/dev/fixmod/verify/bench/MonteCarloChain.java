@@ -22,7 +22,8 @@ import dev.fixmod.verify.theory.LlrHistogram;
  * <p>GMI accounting costs no logarithm per bit: the fixed codes go into an {@link LlrHistogram} (exact), the float
  * LLRs into a histogram of {@link #FLOAT_BINS_PER_NAT} bins per nat, clamped at ±{@link #FLOAT_CLAMP} nats (an
  * approximation: the penalty ln(1 + e^−x) has slope at most 1, so each sample's term moves by at most half a bin,
- * 1/128 nat, and by far less on average). The logarithms are taken once per bin when the GMI is read.
+ * 1/128 nat, and by far less on average; only an LLR wrong by more than the clamp loses more). The logarithms are
+ * taken once per bin when the GMI is read.
  *
  * <p>Not thread-safe: one chain per thread; the counts of several chains add.
  */
@@ -96,8 +97,8 @@ final class MonteCarloChain {
         for (int n = 0; n < block; n++) {
             re[n] += noiseI[n];
             im[n] += noiseQ[n];
-            iCodes[n] = (int) Workload.INPUT.quantize(re[n], clip);
-            qCodes[n] = (int) Workload.INPUT.quantize(im[n], clip);
+            iCodes[n] = adc(re[n]);
+            qCodes[n] = adc(im[n]);
         }
         for (int n = 0; n < block; n++) {
             int label = labels[n];
@@ -126,6 +127,40 @@ final class MonteCarloChain {
         fixedBitErrors += fixedErrors;
         floatBitErrors += floatErrors;
         symbols += block;
+    }
+
+    /**
+     * The receiver's quantizer {@link Workload#INPUT} (half-even, saturate) inline: {@code Math.rint} is exact
+     * half-even rounding, so this equals {@code Workload.INPUT.quantize(x, clip)} for every finite sample, which a
+     * test checks.
+     */
+    private int adc(double x) {
+        double r = Math.rint(x * ADC_SCALE);
+        if (r < ADC_MIN || r > ADC_MAX) {
+            clip.record();
+            return r < ADC_MIN ? (int) ADC_MIN : (int) ADC_MAX;
+        }
+        return (int) r;
+    }
+
+    private static final double ADC_SCALE = Math.scalb(1.0, Workload.INPUT.format().fractionalBits());
+    private static final double ADC_MIN = Workload.INPUT.format().minCode();
+    private static final double ADC_MAX = Workload.INPUT.format().maxCode();
+
+    int[] labels() {
+        return labels;
+    }
+
+    int[] iCodes() {
+        return iCodes;
+    }
+
+    int[] qCodes() {
+        return qCodes;
+    }
+
+    double[] received(boolean q) {
+        return q ? im : re;
     }
 
     long symbols() {
