@@ -1,8 +1,6 @@
 package dev.fixmod.constellation;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * How bit labels are assigned to the points of a family, by trade name. The mappings of published standards are not
@@ -24,7 +22,7 @@ import java.util.stream.Collectors;
  * negative level (PAM, per QAM axis) or counter-clockwise from the first point (PSK). The quasi-Gray constructions are
  * documented at {@link Constellations#crossQam} and {@link Constellations#apsk}.
  */
-public enum Labeling {
+public enum Labeling implements TradeNamed {
     GRAY("gray"),
     NATURAL("natural"),
     QUASI_GRAY("quasi-gray");
@@ -36,6 +34,7 @@ public enum Labeling {
     }
 
     /** The name used on the command line, in specification files and in reports, e.g. {@code quasi-gray}. */
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -47,14 +46,7 @@ public enum Labeling {
 
     /** The labeling of the given name (case-insensitive; {@code _} accepted for {@code -}). */
     public static Labeling fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (Labeling l : values()) {
-            if (l.tradeName.equals(key)) {
-                return l;
-            }
-        }
-        throw new IllegalArgumentException("unknown labeling '" + name + "'; expected one of "
-                + Arrays.stream(values()).map(Labeling::tradeName).collect(Collectors.joining(", ")));
+        return TradeNamed.parse(Labeling.class, name, "labeling");
     }
 
     /** The binary-reflected Gray code of {@code n}: {@code n XOR (n >> 1)}. */

@@ -1,8 +1,6 @@
 package dev.fixmod.constellation;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * How a constellation's points are scaled. Averages use the symbol probabilities.
@@ -18,7 +16,7 @@ import java.util.stream.Collectors;
  *   </tbody>
  * </table>
  */
-public enum Normalization {
+public enum Normalization implements TradeNamed {
     NONE("none"),
     UNIT_ENERGY("unit-energy"),
     UNIT_BIT_ENERGY("unit-bit-energy"),
@@ -30,6 +28,7 @@ public enum Normalization {
         this.tradeName = tradeName;
     }
 
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -41,13 +40,6 @@ public enum Normalization {
 
     /** The mode of the given name (case-insensitive; {@code _} accepted for {@code -}). */
     public static Normalization fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (Normalization n : values()) {
-            if (n.tradeName.equals(key)) {
-                return n;
-            }
-        }
-        throw new IllegalArgumentException("unknown normalization '" + name + "'; expected one of "
-                + Arrays.stream(values()).map(Normalization::tradeName).collect(Collectors.joining(", ")));
+        return TradeNamed.parse(Normalization.class, name, "normalization");
     }
 }

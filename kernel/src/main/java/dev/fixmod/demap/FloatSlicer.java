@@ -8,7 +8,8 @@ import dev.fixmod.map.Labels;
  * A hard-decision slicer on floating-point samples: the reference of each {@link FixedSlicer} method
  * ({@link FloatAxisSlicer}, {@link FloatSectorSlicer}, {@link FloatNearestSlicer}), with the same decisions and the
  * same tie rule, documented with examples on {@link FixedSlicer}: a sample on a boundary is decided as if moved an
- * infinitesimal step toward +I (toward +Q on a boundary parallel to the I axis).
+ * infinitesimal step toward +I (toward +Q on a boundary parallel to the I axis). Decisions are by minimum
+ * distance, the maximum-likelihood decision for equiprobable symbols; symbol probabilities are not used.
  *
  * <p>Batch calls take the stream index of their first symbol (π/2-BPSK turns odd symbols by +90°), refuse NaN and
  * infinite samples before writing anything, and allocate nothing.

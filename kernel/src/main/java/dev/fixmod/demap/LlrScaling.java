@@ -1,8 +1,6 @@
 package dev.fixmod.demap;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * Whether a fixed-point LLR datapath multiplies its metric by the noise scale constant, so that its output is an LLR
@@ -21,7 +19,7 @@ import java.util.stream.Collectors;
  *   </tbody>
  * </table>
  */
-public enum LlrScaling {
+public enum LlrScaling implements TradeNamed {
     /** Multiply by the quantized noise scale constant K; the output is the LLR in nats. */
     NOISE_SCALED("noise-scaled"),
     /** No multiplier; the output is the metric, a positive multiple of the LLR. */
@@ -33,6 +31,7 @@ public enum LlrScaling {
         this.tradeName = tradeName;
     }
 
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -48,17 +47,11 @@ public enum LlrScaling {
      * @throws IllegalArgumentException naming the text and listing the accepted names
      */
     public static LlrScaling fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (LlrScaling s : values()) {
-            if (s.tradeName.equals(key)) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("unknown LLR scaling '" + name + "'; expected one of " + names());
+        return TradeNamed.parse(LlrScaling.class, name, "LLR scaling");
     }
 
     /** The accepted names, comma separated. */
     public static String names() {
-        return Arrays.stream(values()).map(LlrScaling::tradeName).collect(Collectors.joining(", "));
+        return TradeNamed.names(LlrScaling.class);
     }
 }

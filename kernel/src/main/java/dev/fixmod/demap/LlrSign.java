@@ -1,8 +1,6 @@
 package dev.fixmod.demap;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * Which bit value a positive LLR favours. fixmod's convention is {@link #ZERO_POSITIVE},
@@ -24,7 +22,7 @@ import java.util.stream.Collectors;
  * output is the exact negation of a {@code zero-positive} one only when every stage rounds symmetrically
  * ({@code half-even}, {@code half-away}, {@code toward-zero}) and saturates symmetrically.
  */
-public enum LlrSign {
+public enum LlrSign implements TradeNamed {
     /** {@code L = ln P(b=0|y) − ln P(b=1|y)}: positive means "0" is more likely (fixmod's convention). */
     ZERO_POSITIVE("zero-positive", 1),
     /** {@code L = ln P(b=1|y) − ln P(b=0|y)}: positive means "1" is more likely. */
@@ -39,6 +37,7 @@ public enum LlrSign {
     }
 
     /** The name used on the command line, in specifications and in manifests. */
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -59,17 +58,11 @@ public enum LlrSign {
      * @throws IllegalArgumentException naming the text and listing the accepted names
      */
     public static LlrSign fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (LlrSign s : values()) {
-            if (s.tradeName.equals(key)) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException("unknown LLR sign '" + name + "'; expected one of " + names());
+        return TradeNamed.parse(LlrSign.class, name, "LLR sign");
     }
 
     /** The accepted names, comma separated. */
     public static String names() {
-        return Arrays.stream(values()).map(LlrSign::tradeName).collect(Collectors.joining(", "));
+        return TradeNamed.names(LlrSign.class);
     }
 }

@@ -1,8 +1,6 @@
 package dev.fixmod.demap;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * The soft demapping algorithms. Each is named by the trade name used on the command line, in specifications and in
@@ -22,7 +20,7 @@ import java.util.stream.Collectors;
  *   </tbody>
  * </table>
  */
-public enum SoftAlgorithm {
+public enum SoftAlgorithm implements TradeNamed {
     /** Exact log-MAP. */
     LOG_MAP("log-map"),
     /** Exhaustive max-log over all M symbols. */
@@ -38,6 +36,7 @@ public enum SoftAlgorithm {
         this.tradeName = tradeName;
     }
 
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -53,17 +52,11 @@ public enum SoftAlgorithm {
      * @throws IllegalArgumentException naming the text and listing the accepted names
      */
     public static SoftAlgorithm fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (SoftAlgorithm a : values()) {
-            if (a.tradeName.equals(key)) {
-                return a;
-            }
-        }
-        throw new IllegalArgumentException("unknown soft demapping algorithm '" + name + "'; expected one of " + names());
+        return TradeNamed.parse(SoftAlgorithm.class, name, "soft demapping algorithm");
     }
 
     /** The accepted names, comma separated. */
     public static String names() {
-        return Arrays.stream(values()).map(SoftAlgorithm::tradeName).collect(Collectors.joining(", "));
+        return TradeNamed.names(SoftAlgorithm.class);
     }
 }

@@ -1,8 +1,6 @@
 package dev.fixmod.fixed;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * What happens to an integer result that lies outside its format's codes. Every mode records one event on the
@@ -37,7 +35,7 @@ import java.util.stream.Collectors;
  *
  * <p>For an unsigned format {@code symmetric-saturate} is the same as {@code saturate}.
  */
-public enum Overflow {
+public enum Overflow implements TradeNamed {
     /** Clamp to the nearest representable code. */
     SATURATE("saturate"),
     /** Clamp to {@code [−max, max]}: the most negative code is never produced, so negating a result is safe. */
@@ -52,6 +50,7 @@ public enum Overflow {
     }
 
     /** The name used on the command line, in specification files and in reports. */
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -67,18 +66,12 @@ public enum Overflow {
      * @throws IllegalArgumentException naming the text and listing the accepted names
      */
     public static Overflow fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (Overflow o : values()) {
-            if (o.tradeName.equals(key)) {
-                return o;
-            }
-        }
-        throw new IllegalArgumentException("unknown overflow '" + name + "'; expected one of " + names());
+        return TradeNamed.parse(Overflow.class, name, "overflow");
     }
 
     /** The accepted names, comma separated. */
     public static String names() {
-        return Arrays.stream(values()).map(Overflow::tradeName).collect(Collectors.joining(", "));
+        return TradeNamed.names(Overflow.class);
     }
 
     /**

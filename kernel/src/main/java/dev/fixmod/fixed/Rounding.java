@@ -1,8 +1,6 @@
 package dev.fixmod.fixed;
 
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import dev.fixmod.names.TradeNamed;
 
 /**
  * How a value that falls between two codes becomes one of them. Each mode is named by the trade name used in the
@@ -68,7 +66,7 @@ import java.util.stream.Collectors;
  *   </tbody>
  * </table>
  */
-public enum Rounding {
+public enum Rounding implements TradeNamed {
     /** Toward −∞: two's complement truncation, the LSBs are dropped. */
     FLOOR("floor"),
     /** Toward +∞. */
@@ -89,6 +87,7 @@ public enum Rounding {
     }
 
     /** The name used on the command line, in specification files and in reports, e.g. {@code half-up}. */
+    @Override
     public String tradeName() {
         return tradeName;
     }
@@ -104,18 +103,12 @@ public enum Rounding {
      * @throws IllegalArgumentException naming the text and listing the accepted names
      */
     public static Rounding fromName(String name) {
-        String key = name == null ? "" : name.trim().toLowerCase(Locale.ROOT).replace('_', '-');
-        for (Rounding r : values()) {
-            if (r.tradeName.equals(key)) {
-                return r;
-            }
-        }
-        throw new IllegalArgumentException("unknown rounding '" + name + "'; expected one of " + names());
+        return TradeNamed.parse(Rounding.class, name, "rounding");
     }
 
     /** The accepted names, comma separated. */
     public static String names() {
-        return Arrays.stream(values()).map(Rounding::tradeName).collect(Collectors.joining(", "));
+        return TradeNamed.names(Rounding.class);
     }
 
     /**

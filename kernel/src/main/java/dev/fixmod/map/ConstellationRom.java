@@ -26,7 +26,7 @@ import java.util.Objects;
  *     <tr><td>BPSK ±1</td><td>Q15</td><td>−32768, 32767; one overflow event (+1 is one LSB above the top code)</td></tr>
  *     <tr><td>16-QAM, unit energy (levels ±0.316, ±0.949)</td><td>Q15</td><td>±10362, ±31086; no event</td></tr>
  *     <tr><td>16-QAM on the grid ±1, ±3</td><td>Q1.14</td><td>refused: ±3 saturates to ±2, more than one LSB away</td></tr>
- *     <tr><td>64-QAM, unit energy</td><td>Q0.2</td><td>refused: levels 0.154 and 0.463 both round to code 1</td></tr>
+ *     <tr><td>64-QAM, unit energy</td><td>Q1.1</td><td>refused: levels 0.772 and 1.080 both round to code 2</td></tr>
  *     <tr><td>BPSK ±1</td><td>Q15 with wrap</td><td>refused: +1 wraps to −32768</td></tr>
  *   </tbody>
  * </table>

@@ -72,7 +72,7 @@ public final class FloatMapper {
 
     private void put(int label, boolean turned, double[] outRe, double[] outIm, int at) {
         if (turned) {
-            outRe[at] = -im[label];
+            outRe[at] = -im[label] + 0.0; // a point on the I axis turns onto the Q axis: +0.0, never −0.0
             outIm[at] = re[label];
         } else {
             outRe[at] = re[label];

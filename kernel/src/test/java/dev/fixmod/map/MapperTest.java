@@ -81,6 +81,18 @@ class MapperTest {
     }
 
     @Test
+    void aTurnedPointOnTheIAxisHasNoNegativeZero() {
+        // DESIGN.md: outputs never show a signed zero. BPSK ±1 turned by +90° lies on the Q axis: I must be +0.0.
+        double[] re = new double[2];
+        double[] im = new double[2];
+        new FloatMapper(dev.fixmod.constellation.Catalogue.resolve("pi2bpsk")).mapLabels(new int[] {0, 0}, 0, 2, 0,
+                re, im, 0);
+        assertEquals(1.0, re[0]);
+        assertEquals(0x0L, Double.doubleToRawLongBits(re[1]), "+0.0, not -0.0");
+        assertEquals(1.0, im[1]);
+    }
+
+    @Test
     void badInputIsRefusedBeforeAnythingIsWritten() {
         FixedMapper fixed = new FixedMapper(ConstellationRom.of(Constellations.qam(4, true), Q3_4));
         int[] i = {7, 7, 7};

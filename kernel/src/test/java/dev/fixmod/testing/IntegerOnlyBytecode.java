@@ -59,7 +59,8 @@ public final class IntegerOnlyBytecode {
     private static final Pattern INVOKED = Pattern.compile(
             "//\\s+(?:Method|InterfaceMethod)\\s+(?:([\\w/$]+)\\.)?(\"<init>\"|\"<clinit>\"|[\\w$]+):(\\S+)");
     private static final Pattern FIELD = Pattern.compile("//\\s+Field\\s+(?:[\\w/$]+\\.)?[\\w$]+:(\\S+)");
-    private static final Pattern CLASS_HEADER = Pattern.compile("^(?:[a-z]+ )*(?:class|interface|enum) ([\\w.$]+)(?: extends ([\\w.$]+))?.*\\{$");
+    private static final Pattern CLASS_HEADER = Pattern.compile(
+            "^(?:[a-z]+ )*(?:class|interface|enum) ([\\w.$]+)(?:<.*?>)?(?: extends ([\\w.$]+))?.*\\{$");
 
     private static final Map<String, Disassembly> CACHE = new ConcurrentHashMap<>();
 
@@ -211,39 +212,74 @@ public final class IntegerOnlyBytecode {
     }
 
     private static Disassembly disassembly(String internalName) {
-        return CACHE.computeIfAbsent(internalName, IntegerOnlyBytecode::disassemble);
+        Disassembly cached = CACHE.get(internalName);
+        if (cached != null) {
+            return cached;
+        }
+        synchronized (CACHE) {
+            if (!CACHE.containsKey(internalName)) {
+                CACHE.putAll(disassembleAround(internalName));
+            }
+        }
+        Disassembly d = CACHE.get(internalName);
+        if (d == null) {
+            throw new AssertionError("javap printed no class " + internalName);
+        }
+        return d;
     }
 
-    private static Disassembly disassemble(String internalName) {
+    /**
+     * Disassembles the class and, in the same javap run (starting a JVM costs far more than disassembling), every
+     * other kernel class under the same class path root, since calls are followed into them.
+     */
+    private static Map<String, Disassembly> disassembleAround(String internalName) {
         URL url = IntegerOnlyBytecode.class.getClassLoader().getResource(internalName + ".class");
         if (url == null) {
             throw new AssertionError("no class file for " + internalName + " on the test class path");
         }
-        String target;
-        try {
-            target = "file".equals(url.getProtocol()) ? Path.of(url.toURI()).toString() : url.toString();
-        } catch (URISyntaxException e) {
-            throw new AssertionError("bad class file location " + url, e);
+        List<String> targets = new ArrayList<>();
+        if ("file".equals(url.getProtocol())) {
+            Path file;
+            try {
+                file = Path.of(url.toURI());
+            } catch (URISyntaxException e) {
+                throw new AssertionError("bad class file location " + url, e);
+            }
+            Path root = file.getRoot().resolve(file.subpath(0, file.getNameCount() - internalName.split("/").length));
+            try (var files = Files.walk(root.resolve(KERNEL_PREFIX))) {
+                files.filter(f -> f.toString().endsWith(".class"))
+                        .filter(f -> !CACHE.containsKey(root.relativize(f).toString().replace('\\', '/')
+                                .replaceAll("\\.class$", "")))
+                        .map(Path::toString).sorted().forEach(targets::add);
+            } catch (IOException e) {
+                throw new AssertionError("could not list the classes under " + root, e);
+            }
+        } else {
+            targets.add(url.toString());
         }
+        return parse(javap(targets));
+    }
+
+    private static String javap(List<String> targets) {
         Path javap = Path.of(System.getProperty("java.home"), "bin", "javap");
         if (!Files.isExecutable(javap)) {
             throw new AssertionError("javap not found at " + javap + "; a full JDK is needed to inspect bytecode");
         }
-        String output;
+        List<String> command = new ArrayList<>(List.of(javap.toString(), "-c", "-p", "-s"));
+        command.addAll(targets);
         try {
-            Process process = new ProcessBuilder(javap.toString(), "-c", "-p", "-s", target)
-                    .redirectErrorStream(true).start();
-            output = readAll(process.getInputStream());
-            if (!process.waitFor(60, TimeUnit.SECONDS) || process.exitValue() != 0) {
-                throw new AssertionError("javap failed on " + target + ":\n" + output);
+            Process process = new ProcessBuilder(command).redirectErrorStream(true).start();
+            String output = readAll(process.getInputStream());
+            if (!process.waitFor(120, TimeUnit.SECONDS) || process.exitValue() != 0) {
+                throw new AssertionError("javap failed on " + targets + ":\n" + output);
             }
+            return output;
         } catch (IOException e) {
             throw new AssertionError("could not run " + javap, e);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new AssertionError("interrupted while running javap", e);
         }
-        return parse(output);
     }
 
     private static String readAll(InputStream in) throws IOException {
@@ -252,16 +288,29 @@ public final class IntegerOnlyBytecode {
         return bytes.toString(StandardCharsets.UTF_8);
     }
 
-    private static Disassembly parse(String output) {
-        Map<String, Method> methods = new LinkedHashMap<>();
+    /** Splits javap's output of one or more classes at each class header. */
+    private static Map<String, Disassembly> parse(String output) {
+        Map<String, Disassembly> classes = new LinkedHashMap<>();
+        String className = null;
         String superclass = null;
+        Map<String, Method> methods = null;
         Method current = null;
         boolean awaitingDescriptor = false;
         String pendingName = null;
         for (String line : output.split("\\R")) {
             Matcher header = CLASS_HEADER.matcher(line);
-            if (superclass == null && header.matches() && header.group(2) != null) {
-                superclass = header.group(2).replace('.', '/');
+            if (header.matches()) {
+                if (className != null) {
+                    classes.put(className, new Disassembly(superclass, methods));
+                }
+                className = header.group(1).replace('.', '/');
+                superclass = header.group(2) == null ? null : header.group(2).replace('.', '/');
+                methods = new LinkedHashMap<>();
+                current = null;
+                awaitingDescriptor = false;
+                continue;
+            }
+            if (methods == null) {
                 continue;
             }
             Matcher member = MEMBER.matcher(line);
@@ -284,7 +333,10 @@ public final class IntegerOnlyBytecode {
                 current.code.add(line);
             }
         }
-        return new Disassembly(superclass, methods);
+        if (className != null) {
+            classes.put(className, new Disassembly(superclass, methods));
+        }
+        return classes;
     }
 
     private static String memberName(String signature) {

@@ -11,8 +11,8 @@ import dev.fixmod.verify.compare.GoldenSet;
 import dev.fixmod.verify.compare.HexWordReader;
 import dev.fixmod.verify.compare.ReportText;
 import dev.fixmod.verify.compare.VectorFlags;
-import dev.fixmod.verify.compare.WordLayout;
 import dev.fixmod.verify.compare.WordReader;
+import dev.fixmod.verify.formats.FieldLayout;
 import java.io.BufferedInputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -65,7 +65,7 @@ public final class CompareCommand implements Callable<Integer> {
     String port;
 
     @Option(names = "--layout", paramLabel = "FIELDS",
-            description = "Fields of a golden hex file, most significant first: name:Qm.n,... (e.g. i:Q1.6,q:Q1.6).")
+            description = "Fields of a golden hex file, most significant first: name:Qm.n,... (e.g. I:Q2.9,Q:Q2.9).")
     String layoutText;
 
     @Option(names = "--dut", paramLabel = "FILE", description = "The device's dump.")
@@ -157,7 +157,7 @@ public final class CompareCommand implements Callable<Integer> {
     }
 
     private CompareReport compareDump() {
-        WordLayout layout;
+        FieldLayout layout;
         Path goldenFile;
         VectorFlags vectorFlags = VectorFlags.NONE;
         String portName = port;
@@ -183,12 +183,12 @@ public final class CompareCommand implements Callable<Integer> {
                 throw new UsageException("--port selects a port of a vector set folder; " + golden
                         + " is a file");
             }
-            layout = WordLayout.parse(layoutText);
+            layout = FieldLayout.parse(layoutText);
             goldenFile = golden;
         }
         CompareOptions options = options(layout, vectorFlags);
         try (VectorFlags closing = vectorFlags;
-                WordReader g = new HexWordReader(open(goldenFile), goldenFile.toString(), layout.wordBits());
+                WordReader g = new HexWordReader(open(goldenFile), goldenFile.toString(), layout.wordWidth());
                 WordReader d = dutReader(layout)) {
             return new Comparison(layout, options).run(g, vectorFlags, d, portName);
         } catch (IOException e) {
@@ -219,8 +219,8 @@ public final class CompareCommand implements Callable<Integer> {
             VectorFlags flagsA = pa.flags();
             CompareOptions options = options(pa.layout(), flagsA);
             try (VectorFlags closing = flagsA;
-                    WordReader ga = new HexWordReader(open(pa.hex()), pa.hex().toString(), pa.layout().wordBits());
-                    WordReader gb = new HexWordReader(open(pb.hex()), pb.hex().toString(), pb.layout().wordBits())) {
+                    WordReader ga = new HexWordReader(open(pa.hex()), pa.hex().toString(), pa.layout().wordWidth());
+                    WordReader gb = new HexWordReader(open(pb.hex()), pb.hex().toString(), pb.layout().wordWidth())) {
                 out.add(new Comparison(pa.layout(), options).run(ga, flagsA, gb, p));
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
@@ -233,7 +233,7 @@ public final class CompareCommand implements Callable<Integer> {
         return out;
     }
 
-    private CompareOptions options(WordLayout layout, VectorFlags vectorFlags) {
+    private CompareOptions options(FieldLayout layout, VectorFlags vectorFlags) {
         CompareOptions o = CompareOptions.exact(layout.fieldCount())
                 .withSkip(skip)
                 .withSkipLeadingUnknown(!keepUnknownPrefix)
@@ -251,7 +251,7 @@ public final class CompareCommand implements Callable<Integer> {
         return o;
     }
 
-    private long[] tolerance(WordLayout layout) {
+    private long[] tolerance(FieldLayout layout) {
         long[] t = new long[layout.fieldCount()];
         for (String item : tolerances) {
             int eq = item.indexOf('=');
@@ -283,16 +283,16 @@ public final class CompareCommand implements Callable<Integer> {
         return t;
     }
 
-    private WordReader dutReader(WordLayout layout) throws IOException {
+    private WordReader dutReader(FieldLayout layout) throws IOException {
         switch (dutFormat) {
             case HEX:
-                return new HexWordReader(open(dut), dut.toString(), layout.wordBits());
+                return new HexWordReader(open(dut), dut.toString(), layout.wordWidth());
             case CSV:
                 return new CsvWordReader(Files.newBufferedReader(existing(dut), StandardCharsets.UTF_8),
                         dut.toString(), layout);
             case BIN:
-                int bytes = wordBytes == null ? BinaryWordReader.containerBytes(layout.wordBits()) : wordBytes;
-                return new BinaryWordReader(open(dut), dut.toString(), layout.wordBits(), bytes);
+                int bytes = wordBytes == null ? BinaryWordReader.containerBytes(layout.wordWidth()) : wordBytes;
+                return new BinaryWordReader(open(dut), dut.toString(), layout.wordWidth(), bytes);
             default:
                 throw new AssertionError(dutFormat);
         }

@@ -13,8 +13,10 @@ import picocli.CommandLine.Command;
         subcommands = {
                 CommandLine.HelpCommand.class,
                 ConstellationCommand.class,
+                LossCommand.class,
                 CompareCommand.class,
                 DemapCommand.class,
+                VectorsCommand.class,
                 BenchCommand.class,
         },
         footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",

@@ -7,6 +7,8 @@ import dev.fixmod.verify.compare.CompareReport.FieldDiff;
 import dev.fixmod.verify.compare.CompareReport.FieldStats;
 import dev.fixmod.verify.compare.CompareReport.FlagStats;
 import dev.fixmod.verify.compare.CompareReport.Mismatch;
+import dev.fixmod.verify.formats.Field;
+import dev.fixmod.verify.formats.FieldLayout;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -32,10 +34,10 @@ public final class Comparison {
     /** Fewest agreeing vectors that count as evidence when the files end sooner than {@link #PROBE}. */
     static final int PROBE_MIN = 4;
 
-    private final WordLayout layout;
+    private final FieldLayout layout;
     private final CompareOptions options;
 
-    public Comparison(WordLayout layout, CompareOptions options) {
+    public Comparison(FieldLayout layout, CompareOptions options) {
         if (options.tolerance().length != layout.fieldCount()) {
             throw new IllegalArgumentException("tolerances for " + options.tolerance().length + " fields, but the"
                     + " layout " + layout + " has " + layout.fieldCount());
@@ -277,8 +279,7 @@ public final class Comparison {
                     firstUnknown = i;
                 }
                 for (int f = 0; f < nf; f++) {
-                    WordLayout.Field field = layout.field(f);
-                    if (((a.unknown[as] >>> field.shift()) & field.format().wordMask()) != 0) {
+                    if (((a.unknown[as] >>> layout.shift(f)) & layout.field(f).format().wordMask()) != 0) {
                         fieldUnknown[f]++;
                         fieldMismatches[f]++;
                         if (fieldFirst[f] < 0) {
@@ -303,9 +304,9 @@ public final class Comparison {
                 boolean oneLsb = true;
                 boolean atLimit = true;
                 for (int f = 0; f < nf; f++) {
-                    WordLayout.Field field = layout.field(f);
-                    long ec = field.extract(ew);
-                    long ac = field.extract(aw);
+                    Field field = layout.field(f);
+                    long ec = layout.unpack(ew, f);
+                    long ac = layout.unpack(aw, f);
                     if (fieldAgrees(f, ec, ac)) {
                         continue;
                     }
@@ -367,7 +368,7 @@ public final class Comparison {
         }
         if (widthWords > 0) {
             diagnoses.add(new Diagnosis(FaultKind.WORD_WIDTH, firstWidth, widthWords + " dump word(s) do not fit the "
-                    + layout.wordBits() + "-bit word of " + layout.hexDigits() + " hex digits; the first, at "
+                    + layout.wordWidth() + "-bit word of " + layout.hexDigits() + " hex digits; the first, at "
                     + a.reader.source() + ":" + widthLine + ", has " + widthDigitsSeen + " digits"));
         }
         if (unknownWords > 0) {
@@ -382,7 +383,7 @@ public final class Comparison {
 
         List<FieldStats> fieldStats = new ArrayList<>();
         for (int f = 0; f < nf; f++) {
-            WordLayout.Field field = layout.field(f);
+            Field field = layout.field(f);
             fieldStats.add(new FieldStats(field.name(), field.format().toString(), fieldMismatches[f], fieldUnknown[f],
                     fieldMaxDiff[f], fieldFirst[f]));
         }
@@ -417,8 +418,7 @@ public final class Comparison {
             return true;
         }
         for (int f = 0; f < layout.fieldCount(); f++) {
-            WordLayout.Field field = layout.field(f);
-            if (!fieldAgrees(f, field.extract(ew), field.extract(aw))) {
+            if (!fieldAgrees(f, layout.unpack(ew, f), layout.unpack(aw, f))) {
                 return false;
             }
         }
@@ -503,9 +503,10 @@ public final class Comparison {
         if (Long.bitCount(difference & layout.wordMask()) != 1) {
             return "several bits";
         }
-        for (WordLayout.Field f : layout.fields()) {
-            if (bit >= f.shift() && bit < f.shift() + f.format().wordLength()) {
-                return "word bit " + bit + " (field " + f.name() + " bit " + (bit - f.shift()) + ")";
+        for (int f = 0; f < layout.fieldCount(); f++) {
+            int shift = layout.shift(f);
+            if (bit >= shift && bit < shift + layout.field(f).width()) {
+                return "word bit " + bit + " (field " + layout.field(f).name() + " bit " + (bit - shift) + ")";
             }
         }
         return "word bit " + bit;
@@ -517,14 +518,14 @@ public final class Comparison {
         WordStatus st = a.status(i);
         List<FieldDiff> diffs = new ArrayList<>();
         for (int f = 0; f < layout.fieldCount(); f++) {
-            WordLayout.Field field = layout.field(f);
-            long ec = field.extract(e.word[es]);
+            Field field = layout.field(f);
+            long ec = layout.unpack(e.word[es], f);
             double ev = field.format().toDouble(ec);
-            boolean unknownField = ((a.unknown[as] >>> field.shift()) & field.format().wordMask()) != 0;
+            boolean unknownField = ((a.unknown[as] >>> layout.shift(f)) & field.format().wordMask()) != 0;
             if (st == WordStatus.WIDTH || unknownField) {
                 diffs.add(new FieldDiff(field.name(), ec, null, ev, null, null, false));
             } else {
-                long ac = field.extract(a.word[as]);
+                long ac = layout.unpack(a.word[as], f);
                 diffs.add(new FieldDiff(field.name(), ec, ac, ev, field.format().toDouble(ac), ac - ec,
                         fieldAgrees(f, ec, ac)));
             }

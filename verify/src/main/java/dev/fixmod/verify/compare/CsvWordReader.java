@@ -1,5 +1,7 @@
 package dev.fixmod.verify.compare;
 
+import dev.fixmod.verify.formats.Field;
+import dev.fixmod.verify.formats.FieldLayout;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.util.Arrays;
@@ -14,11 +16,11 @@ import java.util.Locale;
  */
 public final class CsvWordReader extends WordReader {
     private final BufferedReader in;
-    private final WordLayout layout;
+    private final FieldLayout layout;
     private final int[] columnOfField;
     private long currentLine;
 
-    public CsvWordReader(BufferedReader in, String source, WordLayout layout) {
+    public CsvWordReader(BufferedReader in, String source, FieldLayout layout) {
         super(source);
         this.in = in;
         this.layout = layout;
@@ -51,7 +53,7 @@ public final class CsvWordReader extends WordReader {
 
     private String names() {
         StringBuilder b = new StringBuilder();
-        for (WordLayout.Field f : layout.fields()) {
+        for (Field f : layout.fields()) {
             b.append(b.length() == 0 ? "" : ", ").append(f.name());
         }
         return b.toString();
@@ -90,14 +92,15 @@ public final class CsvWordReader extends WordReader {
         long unknown = 0;
         WordStatus st = WordStatus.VALID;
         for (int f = 0; f < columnOfField.length; f++) {
-            WordLayout.Field field = layout.field(f);
+            Field field = layout.field(f);
+            int shift = layout.shift(f);
             int c = columnOfField[f];
             if (c >= cells.length) {
                 throw new DumpFormatException(source + ":" + line + ": " + cells.length + " cells, but column '"
                         + field.name() + "' is column " + (c + 1) + " of the header");
             }
             String cell = cells[c].trim();
-            long fieldMask = field.format().wordMask() << field.shift();
+            long fieldMask = field.format().wordMask() << shift;
             if (!cell.isEmpty() && cell.toLowerCase(Locale.ROOT).chars().allMatch(ch -> ch == 'x' || ch == 'z')) {
                 unknown |= fieldMask;
                 if (st == WordStatus.VALID) {
@@ -115,7 +118,7 @@ public final class CsvWordReader extends WordReader {
             if (!field.format().contains(code)) {
                 st = WordStatus.WIDTH;
             }
-            value |= (code << field.shift()) & fieldMask;
+            value |= (code << shift) & fieldMask;
         }
         word = value;
         unknownMask = unknown;

@@ -1,8 +1,9 @@
 package dev.fixmod.verify.compare;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import dev.fixmod.fixed.QFormat;
+import dev.fixmod.verify.formats.Field;
+import dev.fixmod.verify.formats.FieldLayout;
+import dev.fixmod.verify.vectors.Manifest;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
@@ -13,6 +14,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -20,15 +22,14 @@ import java.util.Map;
 
 /**
  * A golden vector set folder as compare needs it: per port, the hex file, its word layout and count from the
- * manifest, and the vectors' corner-case flags (the {@code flags} column of the port's CSV file, named by the
- * manifest's glossary). Each hex file's SHA-256 is checked against the manifest before it is used.
+ * set's {@link Manifest}, and the vectors' corner-case flags (the {@code flags} column of the port's CSV file, flag
+ * names joined by '|', named by the manifest's glossary). Each hex file's SHA-256 is checked against the manifest
+ * before it is used.
  */
 public final class GoldenSet {
-    private static final String MANIFEST = "manifest.json";
-    private static final String SCHEMA = "fixmod-vector-set";
 
     /** One port's files. */
-    public record PortFiles(String port, WordLayout layout, long count, Path hex, Path csv, List<String> flagNames) {
+    public record PortFiles(String port, FieldLayout layout, long count, Path hex, Path csv, List<String> flagNames) {
         /** The vectors' flags, streamed from the CSV file (none when the set has no CSV for the port). */
         public VectorFlags flags() {
             return csv == null ? VectorFlags.NONE : new CsvFlags(csv, flagNames);
@@ -49,65 +50,53 @@ public final class GoldenSet {
      * @throws IllegalArgumentException naming the manifest key or file that is wrong
      */
     public static GoldenSet open(Path folder) {
-        Path manifest = folder.resolve(MANIFEST);
-        if (!Files.isRegularFile(manifest)) {
-            throw new IllegalArgumentException(folder + ": not a vector set folder (no " + MANIFEST + ")");
+        Path manifestFile = folder.resolve(Manifest.FILE_NAME);
+        if (!Files.isRegularFile(manifestFile)) {
+            throw new IllegalArgumentException(folder + ": not a vector set folder (no " + Manifest.FILE_NAME + ")");
         }
-        JsonNode root;
+        Manifest manifest;
         try {
-            root = new ObjectMapper().readTree(manifest.toFile());
+            manifest = Manifest.read(Files.readString(manifestFile, StandardCharsets.UTF_8), manifestFile.toString());
         } catch (IOException e) {
-            throw new IllegalArgumentException(manifest + ": not valid JSON: " + e.getMessage());
+            throw new IllegalArgumentException(manifestFile + ": cannot be read: " + e.getMessage());
         }
-        if (root == null || !SCHEMA.equals(root.path("schema").asText())) {
-            throw new IllegalArgumentException(manifest + ": schema: expected \"" + SCHEMA + "\"");
-        }
-        List<String> flagNames = glossary(root, manifest);
+        List<String> flagNames = glossary(manifest.json().path("flags"), manifestFile);
         Map<String, Path> csvOfPort = new LinkedHashMap<>();
-        JsonNode files = root.path("files");
-        for (JsonNode f : files) {
-            if ("csv".equals(f.path("format").asText())) {
-                csvOfPort.put(f.path("port").asText(), folder.resolve(plain(f.path("name").asText(), manifest)));
+        for (Manifest.Entry f : manifest.files()) {
+            if ("csv".equals(f.format())) {
+                csvOfPort.putIfAbsent(f.port(), folder.resolve(f.name()));
             }
         }
         Map<String, PortFiles> ports = new LinkedHashMap<>();
+        List<Manifest.Entry> files = manifest.files();
         for (int i = 0; i < files.size(); i++) {
-            JsonNode f = files.get(i);
-            if (!"hex".equals(f.path("format").asText())) {
+            Manifest.Entry f = files.get(i);
+            if (!"hex".equals(f.format())) {
                 continue;
             }
-            String at = manifest + ": files[" + i + "]";
-            String port = f.path("port").asText();
-            Path hex = folder.resolve(plain(f.path("name").asText(), manifest));
-            WordLayout layout = layout(f.path("layout"), at + ".layout");
-            String sha = f.path("sha256").asText();
+            String at = manifestFile + ": files[" + i + "]";
+            Path hex = folder.resolve(f.name());
+            FieldLayout layout = layout(f.layout(), at + ".layout");
             if (!Files.isRegularFile(hex)) {
                 throw new IllegalArgumentException(at + ": file " + hex + " is missing");
             }
             String actual = sha256(hex);
-            if (!actual.equals(sha)) {
-                throw new IllegalArgumentException(hex + ": SHA-256 " + actual + " differs from the manifest's " + sha
-                        + "; the golden file was modified or belongs to another set");
+            if (!actual.equals(f.sha256())) {
+                throw new IllegalArgumentException(hex + ": SHA-256 " + actual + " differs from the manifest's "
+                        + f.sha256() + "; the golden file was modified or belongs to another set");
             }
-            ports.put(port, new PortFiles(port, layout, f.path("count").asLong(), hex, csvOfPort.get(port),
-                    flagNames));
+            ports.put(f.port(), new PortFiles(f.port(), layout, f.count(), hex, csvOfPort.get(f.port()), flagNames));
         }
         if (ports.isEmpty()) {
-            throw new IllegalArgumentException(manifest + ": files: no hex file listed; compare reads hex golden files");
+            throw new IllegalArgumentException(manifestFile + ": files: no hex file listed; compare reads hex golden"
+                    + " files");
         }
         return new GoldenSet(folder, ports);
     }
 
-    private static String plain(String name, Path manifest) {
-        if (!name.matches("[A-Za-z0-9_][A-Za-z0-9_.-]*") || name.contains("..")) {
-            throw new IllegalArgumentException(manifest + ": file name '" + name + "' is not a plain name in the set");
-        }
-        return name;
-    }
-
-    private static List<String> glossary(JsonNode root, Path manifest) {
+    private static List<String> glossary(JsonNode flags, Path manifest) {
         List<String> names = new ArrayList<>();
-        for (JsonNode flag : root.path("flags")) {
+        for (JsonNode flag : flags) {
             int bit = flag.path("bit").asInt(-1);
             if (bit < 0 || bit >= 64) {
                 throw new IllegalArgumentException(manifest + ": flags: bit " + flag.path("bit") + " is not 0..63");
@@ -117,29 +106,30 @@ public final class GoldenSet {
             }
             names.set(bit, flag.path("name").asText());
         }
-        return java.util.Collections.unmodifiableList(names);
+        return Collections.unmodifiableList(names);
     }
 
-    /** Reads a layout given as "name:Qm.n,..." or as an array of {name, format} objects, most significant first. */
-    static WordLayout layout(JsonNode node, String where) {
+    /** Reads a layout as the manifest writes it: {@code {"fields": [{"name", "format"}, ...]}}, most significant first. */
+    static FieldLayout layout(JsonNode node, String where) {
+        JsonNode fields = node.path("fields");
+        if (!fields.isArray() || fields.isEmpty()) {
+            throw new IllegalArgumentException(where + ".fields: expected the fields of the word, most significant"
+                    + " first, each {\"name\": ..., \"format\": \"Qm.n\"}");
+        }
+        List<Field> list = new ArrayList<>();
+        for (int i = 0; i < fields.size(); i++) {
+            JsonNode field = fields.get(i);
+            try {
+                list.add(Field.of(field.path("name").asText(), field.path("format").asText()));
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException(where + ".fields[" + i + "]: " + e.getMessage());
+            }
+        }
         try {
-            if (node.isTextual()) {
-                return WordLayout.parse(node.asText());
-            }
-            JsonNode fields = node.isObject() ? node.path("fields") : node;
-            if (fields.isArray() && fields.size() > 0) {
-                List<String> names = new ArrayList<>();
-                List<QFormat> formats = new ArrayList<>();
-                for (JsonNode field : fields) {
-                    names.add(field.path("name").asText());
-                    formats.add(QFormat.parse(field.path("format").asText()));
-                }
-                return WordLayout.of(names, formats);
-            }
+            return FieldLayout.of(list);
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(where + ": " + e.getMessage());
         }
-        throw new IllegalArgumentException(where + ": expected the fields of the word, most significant first");
     }
 
     static String sha256(Path file) {

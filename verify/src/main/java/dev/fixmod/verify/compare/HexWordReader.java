@@ -1,5 +1,6 @@
 package dev.fixmod.verify.compare;
 
+import dev.fixmod.verify.formats.FieldLayout;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.Locale;
@@ -45,8 +46,8 @@ public final class HexWordReader extends WordReader {
      */
     public HexWordReader(InputStream in, String source, int wordBits) {
         super(source);
-        if (wordBits < 1 || wordBits > WordLayout.MAX_WORD_BITS) {
-            throw new IllegalArgumentException("word bits must be 1.." + WordLayout.MAX_WORD_BITS + ", got " + wordBits);
+        if (wordBits < 1 || wordBits > FieldLayout.MAX_WORD_WIDTH) {
+            throw new IllegalArgumentException("word bits must be 1.." + FieldLayout.MAX_WORD_WIDTH + ", got " + wordBits);
         }
         this.in = in;
         this.wordBits = wordBits;

@@ -1,5 +1,6 @@
 package dev.fixmod.verify.formats;
 
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -75,8 +76,36 @@ public final class FieldLayout {
         return new FieldLayout(fields);
     }
 
+    /**
+     * Parses {@code name:Qm.n,name:Qm.n,...}, the first field most significant, e.g. {@code I:Q2.9,Q:Q2.9}.
+     *
+     * @throws IllegalArgumentException naming the bad element and the accepted form
+     */
+    public static FieldLayout parse(String text) {
+        List<Field> parsed = new ArrayList<>();
+        for (String part : text.split(",", -1)) {
+            int colon = part.indexOf(':');
+            if (colon < 0) {
+                throw new IllegalArgumentException("layout element '" + part.trim()
+                        + "' lacks a format; expected name:Qm.n, e.g. I:Q2.9,Q:Q2.9");
+            }
+            parsed.add(Field.of(part.substring(0, colon).trim(), part.substring(colon + 1).trim()));
+        }
+        return new FieldLayout(parsed);
+    }
+
     public List<Field> fields() {
         return fields;
+    }
+
+    /** The index of the field named {@code name}, or −1 when the layout has none. */
+    public int indexOf(String name) {
+        for (int i = 0; i < fields.size(); i++) {
+            if (fields.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     public int fieldCount() {
@@ -95,6 +124,11 @@ public final class FieldLayout {
     /** The bit position of field {@code index}'s least significant bit within the word. */
     public int shift(int index) {
         return shifts[index];
+    }
+
+    /** The mask of the word's W bits. */
+    public long wordMask() {
+        return wordWidth == 64 ? -1L : (1L << wordWidth) - 1;
     }
 
     /** Hex digits per word: ceil(W / 4). */

@@ -37,7 +37,7 @@ class FaultCatalogueTest {
     @Test
     void flippedBit() {
         List<String> d = dut();
-        d.set(57, Dumps.LLR2.hex(Long.parseLong(d.get(57), 16) ^ (1 << 11)));
+        d.set(57, Dumps.word(Long.parseLong(d.get(57), 16) ^ (1 << 11)));
         CompareReport r = Dumps.compare(GOLDEN, d, Dumps.exact());
         assertEquals(1, r.mismatched());
         CompareReport.Diagnosis g = first(r);
@@ -150,7 +150,7 @@ class FaultCatalogueTest {
         for (int i : new int[] {5, 9, 44}) {
             long w = Long.parseLong(d.get(i), 16);
             long lo = (w & 0xFF) == 0x7F ? 0x7E : (w & 0xFF) + 1;
-            d.set(i, Dumps.LLR2.hex((w & 0xFF00) | (lo & 0xFF)));
+            d.set(i, Dumps.word((w & 0xFF00) | (lo & 0xFF)));
         }
         CompareReport r = Dumps.compare(GOLDEN, d, Dumps.exact());
         assertEquals(3, r.mismatched());

@@ -1,10 +1,14 @@
 package dev.fixmod.verify.compare;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.fixmod.demap.FixedSoftDemapper;
+import dev.fixmod.fixed.Overflow;
+import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.fixed.Rounding;
 import dev.fixmod.verify.cli.FixmodCommand;
 import java.io.IOException;
@@ -22,20 +26,27 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The proof on a real simulator: the bundled Verilog LLR demapper, simulated by Icarus Verilog on the golden
- * stimulus, agrees with the golden set word for word; deliberately broken builds of it are caught and diagnosed
- * with the right first vector, field and LSB difference. Skipped, with a message, where iverilog is not installed.
+ * The proof on a real simulator: the bundled Verilog LLR demapper, simulated by Icarus Verilog on the committed
+ * set {@code vectors/nr-qam16}'s stimulus, agrees with that set word for word through {@code fixmod compare};
+ * deliberately broken builds of it are caught and diagnosed with the first vector, field and LSB difference that
+ * the kernel datapath, run with the same fault, predicts. The simulations are skipped, with a message, where
+ * iverilog is not installed.
  */
 class HdlProofTest {
     static final Path HDL = Paths.get("src", "test", "hdl");
+    static final Path SCALE = HDL.resolve("nr16qam_scale.hex");
+    /** Registers between the testbench's stimulus and its dump: input, metric, scale, output. */
+    static final int LATENCY = 3;
+    /** Words the testbench writes after the last vector. */
+    static final int FLUSH = 4;
 
     @TempDir
     static Path dir;
-    static Path set;
+    static NrQam16Set set;
 
     @BeforeAll
     static void setUp() throws IOException {
-        set = HdlGoldenSet.write(dir.resolve("set"));
+        set = NrQam16Set.load();
     }
 
     static boolean simulatorPresent() {
@@ -67,7 +78,7 @@ class HdlProofTest {
         assertEquals(0, p.exitValue(), String.join(" ", command) + " failed:\n" + output);
     }
 
-    /** Compiles the design with the given defines, simulates it on the golden stimulus, returns the dump. */
+    /** Compiles the design with the given defines, simulates it on the set's stimulus, returns the dump. */
     static Path simulate(String name, String... defines) throws IOException, InterruptedException {
         Path work = Files.createDirectories(dir.resolve(name));
         List<String> compile = new ArrayList<>(List.of("iverilog", "-g2001", "-Wall", "-o", "sim.vvp"));
@@ -78,8 +89,9 @@ class HdlProofTest {
         compile.add(HDL.resolve("nr16qam_llr_tb.v").toAbsolutePath().toString());
         run(work, compile.toArray(new String[0]));
         Path dump = work.resolve("llr-dump.hex");
-        run(work, "vvp", "-n", "sim.vvp", "+stim=" + set.resolve("demapper-in.hex").toAbsolutePath(),
-                "+dump=" + dump.toAbsolutePath(), "+count=" + NrQam16LlrModel.stimulus().length);
+        run(work, "vvp", "-n", "sim.vvp", "+stim=" + NrQam16Set.FOLDER.resolve("demapper-in.hex"),
+                "+scale=" + SCALE.toAbsolutePath(), "+dump=" + dump.toAbsolutePath(), "+count=" + set.count(),
+                "+per_level=" + set.perLevel, "+levels=" + set.levels);
         return dump;
     }
 
@@ -99,26 +111,14 @@ class HdlProofTest {
         return new Result(status, out.toString(), err.toString());
     }
 
-    /** The first vector, field and difference where a broken model departs from the golden one. */
-    record FirstDifference(int index, String field, long diff) {
+    static Result compareLlr(Path dump, String... more) {
+        List<String> args = new ArrayList<>(List.of(NrQam16Set.FOLDER.toString(), "--port", "llr", "--dut",
+                dump.toString()));
+        args.addAll(List.of(more));
+        return compare(args.toArray(new String[0]));
     }
 
-    static FirstDifference firstDifference(NrQam16LlrModel broken) {
-        long[] stim = NrQam16LlrModel.stimulus();
-        NrQam16LlrModel golden = NrQam16LlrModel.golden();
-        for (int n = 0; n < stim.length; n++) {
-            long g = golden.llrWord(stim[n]);
-            long b = broken.llrWord(stim[n]);
-            for (WordLayout.Field f : NrQam16LlrModel.LLR_LAYOUT.fields()) {
-                if (f.extract(g) != f.extract(b)) {
-                    return new FirstDifference(n, f.name(), f.extract(b) - f.extract(g));
-                }
-            }
-        }
-        throw new AssertionError("the broken model agrees everywhere: the variant tests nothing");
-    }
-
-    static void assertFirstMismatch(JsonNode report, FirstDifference expected) {
+    static void assertFirstMismatch(JsonNode report, NrQam16Set.FirstDifference expected) {
         JsonNode m = report.path("mismatches").get(0);
         assertEquals(expected.index(), m.path("index").asLong(), report.toPrettyString());
         JsonNode firstBad = null;
@@ -132,31 +132,62 @@ class HdlProofTest {
         assertEquals(expected.diff(), firstBad.path("diffLsb").asLong());
     }
 
+    /** The testbench's inputs are the set's: K per level from the kernel, the level of each vector, the levels. */
+    @Test
+    void theTestbenchInputsAreTheKernelsAndTheSetsOwn() throws IOException {
+        FixedSoftDemapper[] d = set.datapaths(set.goldenSpec());
+        List<Long> scale = new ArrayList<>();
+        for (String line : Files.readAllLines(SCALE)) {
+            String code = line.replaceAll("//.*", "").trim();
+            if (!code.isEmpty()) {
+                scale.add(Long.parseLong(code, 16));
+            }
+        }
+        assertEquals(d.length, scale.size(), SCALE + ": one K per slot");
+        for (int s = 0; s < d.length; s++) {
+            assertEquals(d[s].scaleConstantCode(), scale.get(s), SCALE + " line for slot " + s);
+        }
+        for (int n = 0; n < set.count(); n++) {
+            int rule = n < set.levels * set.perLevel ? 1 + n / set.perLevel : 0;
+            assertEquals(set.slot[n], rule, "the testbench's noise level of vector " + n);
+        }
+        // The Verilog's default levels A1, A3 are the reference ROM's codes (3GPP TS 38.211 5.1.3: label 0 = b0..b3
+        // 0000 is (1 + j)/sqrt(10), label 2 = 0010 is (3 + j)/sqrt(10)).
+        String verilog = Files.readString(HDL.resolve("nr16qam_llr.v"));
+        assertTrue(verilog.contains("parameter A1 = " + set.reference.iCode(0) + ","), "A1");
+        assertTrue(verilog.contains("parameter A3 = " + set.reference.iCode(2) + ","), "A3");
+        // The rebuilt kernel datapath reproduces the committed LLRs, so its variants below predict the faults.
+        assertArrayEquals(set.llrWords, set.kernelLlrWords(set.goldenSpec()));
+    }
+
     @Test
     void bundledDesignAgreesWithTheGoldenSet() throws Exception {
         requireSimulator();
         Path dump = simulate("golden");
-        Result r = compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--latency", "2", "--json");
+        Result r = compareLlr(dump, "--latency", String.valueOf(LATENCY), "--json");
         assertEquals(0, r.status(), r.out() + r.err());
         JsonNode rep = r.report();
         assertTrue(rep.path("agree").asBoolean());
-        assertEquals(512, rep.path("compared").asLong());
+        assertEquals(set.count(), rep.path("compared").asLong());
         assertEquals(0, rep.path("mismatched").asLong());
-        // The testbench writes from the first stimulus cycle plus 4 flush cycles: 4 - 2 words remain after the set.
-        assertEquals(2, rep.path("extraWords").asLong());
+        assertEquals(FLUSH - LATENCY, rep.path("extraWords").asLong());
         // Sign-only and flag subsets see the same agreement.
-        assertEquals(0, compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--latency", "2",
-                "--sign-only", "--flags", "llr-at-max", "--quiet").status());
+        assertEquals(0, compareLlr(dump, "--latency", String.valueOf(LATENCY), "--sign-only", "--flags",
+                "llr-at-max,tie", "--quiet").status());
     }
 
     @Test
-    void truncationInsteadOfHalfUpIsCaughtAtTheRightVector() throws Exception {
+    void truncationInsteadOfHalfEvenIsCaughtAtTheRightVector() throws Exception {
         requireSimulator();
         Path dump = simulate("truncate", "LLR_TRUNCATE");
-        Result r = compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--latency", "2", "--json");
+        Result r = compareLlr(dump, "--latency", String.valueOf(LATENCY), "--json");
         assertEquals(1, r.status(), r.err());
         JsonNode rep = r.report();
-        assertFirstMismatch(rep, firstDifference(new NrQam16LlrModel(Rounding.FLOOR, 31)));
+        Quantizer out = set.goldenSpec().output();
+        long[] floor = set.kernelLlrWords(set.goldenSpec().withOutput(
+                new Quantizer(out.format(), Rounding.FLOOR, out.overflow())));
+        assertFirstMismatch(rep, set.firstDifference(floor));
+        assertEquals(mismatches(floor), rep.path("mismatched").asLong());
         assertEquals("one-lsb", rep.path("diagnoses").get(0).path("kind").asText());
     }
 
@@ -164,37 +195,55 @@ class HdlProofTest {
     void saturationLimitOffByOneIsCaughtAndNamed() throws Exception {
         requireSimulator();
         Path dump = simulate("saturation", "LLR_SAT_OFF_BY_ONE");
-        Result r = compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--latency", "2", "--json");
+        Result r = compareLlr(dump, "--latency", String.valueOf(LATENCY), "--json");
         assertEquals(1, r.status(), r.err());
         JsonNode rep = r.report();
-        FirstDifference expected = firstDifference(new NrQam16LlrModel(Rounding.HALF_UP, 30));
+        Quantizer out = set.goldenSpec().output();
+        long[] plain = set.kernelLlrWords(set.goldenSpec().withOutput(
+                new Quantizer(out.format(), out.rounding(), Overflow.SATURATE)));
+        NrQam16Set.FirstDifference expected = set.firstDifference(plain);
         assertEquals(-1, expected.diff());
         assertFirstMismatch(rep, expected);
+        assertEquals(mismatches(plain), rep.path("mismatched").asLong());
         assertEquals("saturation-limit", rep.path("diagnoses").get(0).path("kind").asText());
-        // Every mismatching vector has an LLR at the limit, so the flag breakdown puts them all under llr-at-max.
+        // Every mismatching vector has an LLR at the lowest code, so the flag breakdown puts them under llr-at-min.
+        boolean seen = false;
         for (JsonNode f : rep.path("flags")) {
-            if (f.path("flag").asText().equals("llr-at-max")) {
+            if (f.path("flag").asText().equals("llr-at-min")) {
                 assertEquals(rep.path("mismatched").asLong(), f.path("mismatched").asLong());
+                seen = true;
             }
         }
+        assertTrue(seen, rep.path("flags").toString());
     }
 
     @Test
     void extraLatencyFailsWithoutAlignmentAndIsRecoveredByTheSearch() throws Exception {
         requireSimulator();
         Path dump = simulate("latency", "LLR_EXTRA_LATENCY");
-        Result fixed = compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--latency", "2",
-                "--json");
+        Result fixed = compareLlr(dump, "--latency", String.valueOf(LATENCY), "--json");
         assertEquals(1, fixed.status(), fixed.err());
         JsonNode rep = fixed.report();
         JsonNode diagnosis = rep.path("diagnoses").get(0);
         assertEquals("latency", diagnosis.path("kind").asText());
-        assertTrue(diagnosis.path("message").asText().contains("--latency 3"), diagnosis.toString());
-        assertEquals(0, rep.path("mismatches").get(0).path("index").asLong());
+        assertTrue(diagnosis.path("message").asText().contains("--latency " + (LATENCY + 1)), diagnosis.toString());
+        // One word late: vector n meets vector n - 1's word (the reset word, 0, for n = 0).
+        long[] late = new long[set.count()];
+        for (int n = 1; n < late.length; n++) {
+            late[n] = set.llrWords[n - 1];
+        }
+        assertFirstMismatch(rep, set.firstDifference(late));
 
-        Result searched = compare(set.toString(), "--port", "llr", "--dut", dump.toString(), "--align-window", "8",
-                "--json");
+        Result searched = compareLlr(dump, "--align-window", "8", "--json");
         assertEquals(0, searched.status(), searched.out());
-        assertEquals(3, searched.report().path("alignment").path("latency").asInt());
+        assertEquals(LATENCY + 1, searched.report().path("alignment").path("latency").asInt());
+    }
+
+    private static long mismatches(long[] words) {
+        long n = 0;
+        for (int i = 0; i < words.length; i++) {
+            n += words[i] != set.llrWords[i] ? 1 : 0;
+        }
+        return n;
     }
 }

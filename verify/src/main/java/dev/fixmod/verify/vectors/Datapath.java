@@ -1,0 +1,68 @@
+package dev.fixmod.verify.vectors;
+
+import dev.fixmod.fixed.OverflowCounter;
+
+/**
+ * The kernel blocks a vector set exercises, as the generator sees them: the fixed mapper ROM, the float symbol, the
+ * demapper input quantizer, the fixed slicer and LLR datapath, and the float reference LLR. Batch methods over
+ * primitive arrays; safe to share between threads (counters are passed in). A noise {@code level} of −1 means the
+ * design E_s/N0 of the specification (vectors without noise).
+ */
+interface Datapath {
+
+    /** Bits per symbol k. */
+    int bitsPerSymbol();
+
+    /** The number of labels M = 2^k. */
+    default int size() {
+        return 1 << bitsPerSymbol();
+    }
+
+    /** The mapper ROM entry of {@code label} (even symbols): I and Q codes of the mapper output format. */
+    long romI(int label);
+
+    long romQ(int label);
+
+    /** Maps labels through the fixed mapper; {@code firstSymbol} is the stream index of the first. */
+    void map(int[] labels, int count, long firstSymbol, long[] i, long[] q);
+
+    /** The float (normalized) symbol of {@code label}, the channel's input. */
+    double symbolI(int label);
+
+    double symbolQ(int label);
+
+    /** The average symbol energy E_s of the float symbols. */
+    double averageEnergy();
+
+    /** Quantizes one real channel sample to a demapper input code. */
+    long quantizeInput(double x, OverflowCounter counter);
+
+    /** The slicer's reference points in demapper input codes, by label. */
+    long[] referenceI();
+
+    long[] referenceQ();
+
+    /** Hard decisions: the label the slicer picks for each input. */
+    void slice(long[] i, long[] q, int count, long firstSymbol, int[] labels);
+
+    /** Fixed LLRs, {@code k} codes per input in the requested sign convention; returns the overflow events. */
+    long llr(long[] i, long[] q, int count, int level, long[] llr);
+
+    /**
+     * Float reference LLRs, {@code k} per input, in the units of the LLR codes' real values (nats when the datapath
+     * is noise-scaled, the metric's units when unscaled).
+     */
+    void referenceLlr(double[] i, double[] q, int count, int level, double[] llr);
+
+    /** The slicer's decision thresholds on the I axis as demapper input codes, ascending; empty if not per axis. */
+    long[] thresholdsI();
+
+    /** The slicer's decision thresholds on the Q axis as demapper input codes, ascending; empty if not per axis. */
+    long[] thresholdsQ();
+
+    /** The lowest code the LLR stage emits (the most negative code, or minus the largest for symmetric-saturate). */
+    long llrLow();
+
+    /** The highest code the LLR stage emits. */
+    long llrHigh();
+}
