@@ -79,7 +79,7 @@ public record BenchReport(Machine machine, String settings, List<Measurement> re
         StringBuilder sb = new StringBuilder();
         sb.append("## fixmod benchmarks\n\n");
         sb.append("Machine: ").append(machine.describe()).append(".  \n");
-        sb.append("Settings: ").append(settings).append(". Error: half-width of JMH's 99.9 % confidence interval.\n\n");
+        sb.append("Settings: ").append(settings).append(".\n\n");
         sb.append("| benchmark | parameters | threads | ops/s | ± | one op | per op | derived |\n");
         sb.append("|---|---|---:|---:|---:|---|---:|---:|\n");
         for (Measurement m : results) {

@@ -46,7 +46,7 @@ public final class BenchRunner {
 
         String describe() {
             return "1 fork, " + warmupIterations + " × " + warmupSeconds + " s warm-up, " + iterations + " × "
-                    + seconds + " s measurement";
+                    + seconds + " s measurement; ± is the half-width of JMH's 99.9 % confidence interval";
         }
     }
 

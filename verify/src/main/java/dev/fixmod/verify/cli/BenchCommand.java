@@ -2,6 +2,7 @@ package dev.fixmod.verify.cli;
 
 import dev.fixmod.verify.bench.BenchReport;
 import dev.fixmod.verify.bench.BenchRunner;
+import dev.fixmod.verify.bench.CpuTime;
 import dev.fixmod.verify.bench.Growth;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -32,6 +33,7 @@ import picocli.CommandLine.Spec;
                 "  fixmod bench --quick LlrBench --param demapper=fixed:max-log:256-qam,fixed:max-log-per-axis:256-qam",
                 "  fixmod bench --list",
                 "  fixmod bench --growth                      time and memory vs vector count and order",
+                "  fixmod bench --cpu-time                    target figures as thread CPU time (busy machines)",
                 "",
                 "Figures depend on the machine and its load: compare ratios from one run, not across machines.",
                 "Exit status: 0 success (whether or not targets are met), 2 bad option or pattern."})
@@ -59,6 +61,10 @@ public final class BenchCommand implements Callable<Integer> {
             + " order instead of running JMH.")
     boolean growth;
 
+    @Option(names = "--cpu-time", description = "Measure the single-thread target figures as thread CPU time in this"
+            + " JVM (a cross-check for a busy machine) instead of running JMH.")
+    boolean cpuTime;
+
     @Option(names = "--growth-max", paramLabel = "COUNT", defaultValue = "1000000",
             description = "Largest vector count of --growth, a power of ten from 10000 to 100000000 (default:"
                     + " ${DEFAULT-VALUE}).")
@@ -83,6 +89,16 @@ public final class BenchCommand implements Callable<Integer> {
                 throw new UsageException("--list runs nothing, so it writes no --json");
             }
             BenchRunner.list(include).forEach(out::println);
+            out.flush();
+            return ExitStatus.OK;
+        }
+        if (cpuTime) {
+            if (list || growth || include != null || json != null || !params.isEmpty()) {
+                throw new UsageException("--cpu-time takes no other option or PATTERN");
+            }
+            BenchReport report = new BenchReport(BenchReport.Machine.current().finished(),
+                    "thread CPU time, best of 7 × 0.2 s after 1 s warm-up, no fork", CpuTime.measure());
+            out.print(report.markdown());
             out.flush();
             return ExitStatus.OK;
         }
