@@ -34,8 +34,11 @@ final class MonteCarloChain {
     private static final double[] PENALTY = new double[PENALTY_RANGE * PENALTY_STEPS_PER_NAT + 2];
     private static final double LN2 = StrictMath.log(2.0);
 
+    private static final double PENALTY_LAST = PENALTY_RANGE * PENALTY_STEPS_PER_NAT;
+
     static {
-        for (int i = 0; i < PENALTY.length; i++) {
+        // Entries RANGE·STEPS and RANGE·STEPS + 1 stay 0: beyond 32 nats g < 1.3e−14 is dropped.
+        for (int i = 0; i < PENALTY_RANGE * PENALTY_STEPS_PER_NAT; i++) {
             PENALTY[i] = StrictMath.log1p(StrictMath.exp(-(double) i / PENALTY_STEPS_PER_NAT));
         }
     }
@@ -131,8 +134,9 @@ final class MonteCarloChain {
                 // A decision of 1 when the LLR is negative; 0 (a tie) decides 0.
                 fixedErrors += bit ^ (codes[at] >>> 31);
                 double l = llr[at];
-                floatErrors += bit ^ (l < 0 ? 1 : 0);
-                double x = bit == 0 ? -l : l;
+                // The sign bit is l < 0: the demappers never return −0.0.
+                floatErrors += bit ^ (int) (Double.doubleToRawLongBits(l) >>> 63);
+                double x = l * (2 * bit - 1); // exact: −l for bit 0, l for bit 1, without a branch
                 penalty[b] += Math.max(x, 0.0) + g(Math.abs(x));
             }
         }
@@ -144,12 +148,12 @@ final class MonteCarloChain {
         symbols += block;
     }
 
-    /** ln(1 + e^−t) for t ≥ 0 by linear interpolation in {@link #PENALTY}. */
+    /**
+     * ln(1 + e^−t) for t ≥ 0 by linear interpolation in {@link #PENALTY}; from 32 nats on the last two entries are 0,
+     * so a clamped index gives 0 without a branch (the LLR magnitudes of a noisy block are unpredictable).
+     */
     private static double g(double t) {
-        double u = t * PENALTY_STEPS_PER_NAT;
-        if (!(u < PENALTY_RANGE * PENALTY_STEPS_PER_NAT)) {
-            return 0.0;
-        }
+        double u = Math.min(t * PENALTY_STEPS_PER_NAT, PENALTY_LAST);
         int i = (int) u;
         double f = u - i;
         return PENALTY[i] + f * (PENALTY[i + 1] - PENALTY[i]);
