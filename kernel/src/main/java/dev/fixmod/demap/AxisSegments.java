@@ -81,34 +81,39 @@ final class AxisSegments {
         return b;
     }
 
-    /** The segment of doubled coordinate {@code twoY}: the number of boundaries at or below it (binary search). */
+    /**
+     * The segment of doubled coordinate {@code twoY}: the number of boundaries at or below it. A binary search whose
+     * steps select with a conditional move instead of a branch: noisy samples make the branch unpredictable, and a
+     * mispredicted branch costs more than the whole step.
+     */
     static int segmentOf(double[] boundaries, double twoY) {
-        int low = 0;
-        int high = boundaries.length;
-        while (low < high) {
-            int mid = (low + high) >>> 1;
-            if (boundaries[mid] <= twoY) {
-                low = mid + 1;
-            } else {
-                high = mid;
-            }
+        int n = boundaries.length;
+        if (n == 0) {
+            return 0;
         }
-        return low;
+        int base = 0;
+        // Invariant: the count lies in [base, base + n].
+        while (n > 1) {
+            int half = n >>> 1;
+            base = boundaries[base + half] <= twoY ? base + half : base;
+            n -= half;
+        }
+        return boundaries[base] <= twoY ? base + 1 : base;
     }
 
     /** {@link #segmentOf} on integer boundaries (integer-only). */
     static int segmentOfCode(long[] boundaries, long twoY) {
-        int low = 0;
-        int high = boundaries.length;
-        while (low < high) {
-            int mid = (low + high) >>> 1;
-            if (boundaries[mid] <= twoY) {
-                low = mid + 1;
-            } else {
-                high = mid;
-            }
+        int n = boundaries.length;
+        if (n == 0) {
+            return 0;
         }
-        return low;
+        int base = 0;
+        while (n > 1) {
+            int half = n >>> 1;
+            base = boundaries[base + half] <= twoY ? base + half : base;
+            n -= half;
+        }
+        return boundaries[base] <= twoY ? base + 1 : base;
     }
 
     /** The number of comparisons {@link #segmentOf} makes on {@code n} boundaries: ⌈log2(n + 1)⌉. */

@@ -28,6 +28,16 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     private final long[][] zeroCode;
     private final long[][] oneCode;
     private final int exactFractionalBits;
+    private final StageFit metricFit;
+    /** Per axis code y and bit b, at {@code (y − minCode)·k + b}: the LLR code; built on the first large batch. */
+    private int[] table;
+    /**
+     * Per axis (I, Q) and axis code: the stage events of that axis's bits, packed as metric + scale·2^21 +
+     * output·2^42 so that one addition per sample and axis tallies all three.
+     */
+    private long[][] rowEvents;
+    /** The label bits each axis carries. */
+    private int[][] axisBitList;
 
     public FixedPerAxisMaxLogDemapper(ConstellationRom reference, LlrOptions options, FixedLlrSpec spec) {
         super(SoftAlgorithm.MAX_LOG_PER_AXIS, reference, options, spec);
@@ -38,6 +48,7 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
         int sign = options.sign().factor();
         this.axis = places.axis;
         this.exactFractionalBits = 2 * input.fractionalBits();
+        this.metricFit = new StageFit(spec.metric(), exactFractionalBits);
         this.boundaries = new long[bitsPerSymbol][];
         this.slope = new long[bitsPerSymbol][];
         this.offset = new long[bitsPerSymbol][];
@@ -70,6 +81,89 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
         }
     }
 
+    /** Input words up to this many bits get a code table (2^W · k entries); wider ones compute every sample. */
+    static final int TABLE_MAX_INPUT_BITS = 16;
+    /** Batches shorter than this compute every sample, so a demapper used on a few samples never builds a table. */
+    static final int TABLE_MIN_BATCH = 256;
+
+    /**
+     * Each bit's LLR code is a function of one axis code, so for inputs of up to {@link #TABLE_MAX_INPUT_BITS} bits
+     * the datapath is evaluated once per (code, bit), by the same {@link #metric} and stages, and batches read the
+     * results: the same codes and the same event counts, at a table read per LLR instead of a search, a product and
+     * three stage fits. The hardware model and its {@link #cost} are unchanged; the table is a software device.
+     */
+    @Override
+    boolean computeBatch(int[] i, int[] q, int offset, int count, int[] llr, int llrOffset) {
+        if (count < TABLE_MIN_BATCH || input.wordLength() > TABLE_MAX_INPUT_BITS) {
+            return false;
+        }
+        if (table == null) {
+            buildTable();
+        }
+        int k = bitsPerSymbol;
+        int min = (int) input.minCode();
+        int[] t = table;
+        int[] onI = axisBitList[0];
+        int[] onQ = axisBitList[1];
+        long[] eventsI = rowEvents[0];
+        long[] eventsQ = rowEvents[1];
+        for (int done = 0; done < count; done += TALLY_SAMPLES) {
+            int end = Math.min(count, done + TALLY_SAMPLES);
+            long tally = 0;
+            for (int n = done; n < end; n++) {
+                int codeI = i[offset + n] - min;
+                int codeQ = (q == null ? 0 : q[offset + n]) - min;
+                int rowI = codeI * k;
+                int rowQ = codeQ * k;
+                int out = llrOffset + n * k;
+                for (int b : onI) {
+                    llr[out + b] = t[rowI + b];
+                }
+                for (int b : onQ) {
+                    llr[out + b] = t[rowQ + b];
+                }
+                tally += eventsI[codeI] + eventsQ[codeQ];
+            }
+            metricCounter().record(tally & FIELD);
+            scaleCounter().record((tally >>> 21) & FIELD);
+            outputCounter().record(tally >>> 42);
+        }
+        return true;
+    }
+
+    /** Samples per tally: each adds at most k ≤ 30 events per field, so a 21-bit field cannot overflow. */
+    private static final int TALLY_SAMPLES = 1 << 15;
+    private static final long FIELD = (1L << 21) - 1;
+
+    private void buildTable() {
+        int k = bitsPerSymbol;
+        long min = input.minCode();
+        int codes = (int) (input.maxCode() - min + 1);
+        int[] t = new int[codes * k];
+        long[][] events = new long[2][codes];
+        OverflowCounter m = OverflowCounter.unnamed();
+        OverflowCounter s = OverflowCounter.unnamed();
+        OverflowCounter o = OverflowCounter.unnamed();
+        for (int c = 0; c < codes; c++) {
+            long y = min + c;
+            for (int b = 0; b < k; b++) {
+                m.reset();
+                s.reset();
+                o.reset();
+                t[c * k + b] = (int) finish(metric(b, y, y, m), s, o);
+                events[axis[b]][c] += m.events() + (s.events() << 21) + (o.events() << 42);
+            }
+        }
+        int[][] lists = new int[2][];
+        for (int a = 0; a < 2; a++) {
+            int axisIndex = a;
+            lists[a] = java.util.stream.IntStream.range(0, k).filter(b -> axis[b] == axisIndex).toArray();
+        }
+        axisBitList = lists;
+        rowEvents = events;
+        table = t;
+    }
+
     @Override
     void prepare(long iCode, long qCode, OverflowCounter metric) {
         // Every bit reads its own axis directly; nothing is shared.
@@ -79,7 +173,7 @@ public final class FixedPerAxisMaxLogDemapper extends FixedSoftDemapper {
     long metric(int b, long iCode, long qCode, OverflowCounter metric) {
         long twoY = 2 * (axis[b] == 0 ? iCode : qCode);
         int s = AxisSegments.segmentOfCode(boundaries[b], twoY);
-        return spec.metric().fit(slope[b][s] * (twoY - offset[b][s]), exactFractionalBits, metric);
+        return metricFit.fit(slope[b][s] * (twoY - offset[b][s]), metric);
     }
 
     @Override

@@ -52,6 +52,8 @@ public abstract class FixedSoftDemapper {
     private final boolean scaled;
     private final int productFractionalBits;
     private final boolean oneDimensional;
+    private final StageFit scaleFit;
+    private final StageFit outputFit;
     private final OverflowCounter metricCounter = new OverflowCounter(METRIC_STAGE);
     private final OverflowCounter scaleCounter = new OverflowCounter(SCALE_STAGE);
     private final OverflowCounter outputCounter = new OverflowCounter(OUTPUT_STAGE);
@@ -101,6 +103,9 @@ public abstract class FixedSoftDemapper {
             this.scaleCode = 1;
             this.productFractionalBits = spec.metric().format().fractionalBits();
         }
+        this.scaleFit = scaled ? new StageFit(spec.scale(), productFractionalBits) : null;
+        this.outputFit = new StageFit(spec.output(), scaled ? spec.scale().format().fractionalBits()
+                : productFractionalBits);
     }
 
     /**
@@ -253,8 +258,10 @@ public abstract class FixedSoftDemapper {
                 checkCode("Q", offset + n, q[offset + n]);
             }
         }
-        for (int n = 0; n < count; n++) {
-            compute(i[offset + n], q == null ? 0 : q[offset + n], llr, llrOffset + n * bitsPerSymbol);
+        if (!computeBatch(i, q, offset, count, llr, llrOffset)) {
+            for (int n = 0; n < count; n++) {
+                compute(i[offset + n], q == null ? 0 : q[offset + n], llr, llrOffset + n * bitsPerSymbol);
+            }
         }
     }
 
@@ -317,11 +324,36 @@ public abstract class FixedSoftDemapper {
     }
 
     private long finish(long metric) {
+        return finish(metric, scaleCounter, outputCounter);
+    }
+
+    /** The scale and output stages of one bit's metric, counting on the given counters. */
+    final long finish(long metric, OverflowCounter scale, OverflowCounter output) {
         if (scaled) {
-            long product = spec.scale().fit(metric * scaleCode, productFractionalBits, scaleCounter);
-            return spec.output().fit(product, spec.scale().format().fractionalBits(), outputCounter);
+            return outputFit.fit(scaleFit.fit(metric * scaleCode, scale), output);
         }
-        return spec.output().fit(metric, productFractionalBits, outputCounter);
+        return outputFit.fit(metric, output);
+    }
+
+    /**
+     * A faster way to the same codes and counts for a validated batch, if the datapath has one; returns whether it
+     * handled the batch (the default has none).
+     */
+    boolean computeBatch(int[] i, int[] q, int offset, int count, int[] llr, int llrOffset) {
+        return false;
+    }
+
+    /** The stage counters, for subclasses that tally a batch's events themselves. */
+    final OverflowCounter metricCounter() {
+        return metricCounter;
+    }
+
+    final OverflowCounter scaleCounter() {
+        return scaleCounter;
+    }
+
+    final OverflowCounter outputCounter() {
+        return outputCounter;
     }
 
     /** Per-sample work shared by all bits (distances, folds); integer-only. */

@@ -28,6 +28,14 @@ public final class OverflowCounter {
         events++;
     }
 
+    /** Records {@code count} events at once (a batch's tally), {@code count >= 0}. */
+    public void record(long count) {
+        if (count < 0) {
+            throw new IllegalArgumentException("an event count must be >= 0, got " + count);
+        }
+        events += count;
+    }
+
     /** Adds the events of another counter (e.g. from another thread). */
     public void add(OverflowCounter other) {
         events += other.events;

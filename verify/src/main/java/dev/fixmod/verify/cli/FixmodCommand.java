@@ -20,6 +20,7 @@ import picocli.CommandLine.Command;
                 DemoCommand.class,
                 DemapCommand.class,
                 VectorsCommand.class,
+                BenchCommand.class,
         },
         footer = {"", "Examples:",
                 "  fixmod constellation nr:qam64",

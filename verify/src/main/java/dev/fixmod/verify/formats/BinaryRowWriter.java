@@ -21,7 +21,7 @@ class BinaryRowWriter extends BaseRowWriter {
     @Override
     final void row(long index, long flags, long[] codes, int offset) throws IOException {
         if (packed) {
-            sink.littleEndian(layout.pack(codes, offset), bytes);
+            sink.littleEndian(layout.packChecked(codes, offset), bytes);
         } else {
             for (int i = 0; i < layout.fieldCount(); i++) {
                 sink.littleEndian(codes[offset + i], bytes);

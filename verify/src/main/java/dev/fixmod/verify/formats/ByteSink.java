@@ -88,6 +88,17 @@ final class ByteSink implements Closeable {
         }
     }
 
+    /** {@link #hex} followed by a line feed, with one buffer check for the whole line. */
+    void hexLine(long v, int digits) throws IOException {
+        room(digits + 1);
+        int p = pos;
+        for (int d = digits - 1; d >= 0; d--) {
+            buf[p++] = HEX[(int) (v >>> (4 * d)) & 0xF];
+        }
+        buf[p++] = '\n';
+        pos = p;
+    }
+
     /** The low {@code bytes} bytes of {@code v}, least significant first. */
     void littleEndian(long v, int bytes) throws IOException {
         room(bytes);

@@ -156,6 +156,15 @@ public final class FieldLayout {
         return word;
     }
 
+    /** {@link #pack} of codes already checked (the row writers check every row before writing it). */
+    long packChecked(long[] codes, int offset) {
+        long word = 0;
+        for (int i = 0; i < shifts.length; i++) {
+            word |= (codes[offset + i] & masks[i]) << shifts[i];
+        }
+        return word;
+    }
+
     /** Throws if {@code code} lies outside field {@code index}'s format. */
     void check(int index, long code) {
         Field f = fields.get(index);

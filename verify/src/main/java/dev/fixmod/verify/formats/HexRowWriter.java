@@ -25,7 +25,6 @@ final class HexRowWriter extends BaseRowWriter {
 
     @Override
     void row(long index, long flags, long[] codes, int offset) throws IOException {
-        sink.hex(layout.pack(codes, offset), digits);
-        sink.put('\n');
+        sink.hexLine(layout.packChecked(codes, offset), digits);
     }
 }

@@ -53,26 +53,32 @@ final class Ziggurat {
         return StrictMath.exp(-0.5 * x * x);
     }
 
+    /** Draws computed per step of {@link #fill}: enough to amortize the step, few enough to stay in L1. */
+    private static final int STEP = 256;
+
     static void fill(double[] out, int offset, int length, StreamKey key, long firstIndex) {
-        int[] block = new int[4];
+        long[] words = new long[Math.min(length, STEP)];
         Retries retries = new Retries(key);
         long n = firstIndex;
         int end = offset + length;
         int pos = offset;
         while (pos < end) {
-            Philox4x32.block(key, n >>> 1, 0, block, 0);
-            for (int h = (int) (n & 1); h < 2 && pos < end; h++) {
-                long w = Philox4x32.join(block[2 * h], block[2 * h + 1]);
+            int count = Math.min(STEP, end - pos);
+            // Gaussian n's primary word is draw n (word pair n & 1 of block n >>> 1).
+            Philox4x32.draws(words, 0, count, key, n);
+            for (int j = 0; j < count; j++) {
+                long w = words[j];
                 int i = (int) w & (LAYERS - 1);
                 double x = Uniform.unit(w) * X[i];
                 if (x < X[i + 1]) {
-                    out[pos++] = (w & 0x80) != 0 ? -x : x;
+                    out[pos + j] = (w & 0x80) != 0 ? -x : x;
                 } else {
-                    retries.start(n);
-                    out[pos++] = outsideRectangle(i, (w & 0x80) != 0, x, retries);
+                    retries.start(n + j);
+                    out[pos + j] = outsideRectangle(i, (w & 0x80) != 0, x, retries);
                 }
-                n++;
             }
+            pos += count;
+            n += count;
         }
     }
 

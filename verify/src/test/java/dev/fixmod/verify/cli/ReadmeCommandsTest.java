@@ -21,7 +21,9 @@ import org.junit.jupiter.api.io.TempDir;
  * Every {@code fixmod} command in a code block of README.md is run by a test, so the README cannot go stale. The
  * commands of the compare walk-through are run by {@code compare.ReadmeWalkthroughTest} (it needs a simulator), the
  * {@code fixmod loss} commands of the loss walk-through by {@link LossCommandTest}, {@code ./fixmod demo} by
- * {@code demo.DemoTest} (into a temporary folder); this test runs all the others, in order, as written: paths that
+ * {@code demo.DemoTest} (into a temporary folder); the {@code fixmod bench} measurements of the Performance section
+ * take minutes, so they are not run: {@code bench.BenchSuiteTest} checks that command's options instead. This test
+ * runs all the others, in order, as written: paths that
  * exist in the repository are read from there, other relative paths and /tmp/ are in a temporary folder, and
  * {@code > FILE} receives the standard output. A trailing {@code # exit N} comment states the expected status
  * (default 0).
@@ -72,7 +74,7 @@ class ReadmeCommandsTest {
         assertTrue(lines.stream().anyMatch(l -> l.text().equals(DEMO)), "the quick start shows " + DEMO);
         int here = 0;
         for (Line line : lines) {
-            if (line.inCompareWalkthrough() || line.text().equals(DEMO)
+            if (line.inCompareWalkthrough() || line.text().equals(DEMO) || line.text().startsWith("./fixmod bench")
                     || (line.inLossSection() && line.text().startsWith("./fixmod loss "))) {
                 continue;
             }

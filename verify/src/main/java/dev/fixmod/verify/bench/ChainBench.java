@@ -1,0 +1,59 @@
+package dev.fixmod.verify.bench;
+
+import dev.fixmod.demap.SoftAlgorithm;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicLong;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OperationsPerInvocation;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
+
+/**
+ * The whole {@link MonteCarloChain} (per-axis max-log, float and fixed); one operation is one symbol. The two
+ * methods differ only in the number of threads JMH runs them on, each thread with its own chain and symbol range;
+ * JMH reports their summed throughput.
+ */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+public class ChainBench {
+    private static final AtomicLong THREADS = new AtomicLong();
+
+    @Param({"16-qam", "256-qam"})
+    public String scenario;
+
+    private MonteCarloChain chain;
+    private long next;
+
+    @Setup
+    public void setUp() {
+        chain = new MonteCarloChain(Workload.of(scenario), SoftAlgorithm.MAX_LOG_PER_AXIS, Workload.BLOCK);
+        next = THREADS.getAndIncrement() << 40;
+    }
+
+    @Benchmark
+    @Threads(1)
+    @OperationsPerInvocation(Workload.BLOCK)
+    public long oneThread() {
+        return step();
+    }
+
+    @Benchmark
+    @Threads(2)
+    @OperationsPerInvocation(Workload.BLOCK)
+    public long twoThreads() {
+        return step();
+    }
+
+    private long step() {
+        chain.run(next);
+        next += Workload.BLOCK;
+        return chain.symbols();
+    }
+}
