@@ -120,6 +120,10 @@ public record FixedLlrSpec(Rounding constantRounding, Quantizer metric, LlrScali
         double k = FixedLevels.scaleValue(algorithm, constellation, options);
         int kInteger = Math.max(0, 64 - Long.numberOfLeadingZeros((long) Math.floor(k)));
         QFormat kFormat = QFormat.unsigned(kInteger, Math.max(0, 16 - kInteger));
+        if (rounding.roundToIntegral(Math.scalb(k, kFormat.fractionalBits())) > kFormat.maxCode()) {
+            // K just below a power of two (e.g. 0.9999999999999998) rounds up past the format: one more integer bit.
+            kFormat = QFormat.unsigned(kInteger + 1, Math.max(0, 15 - kInteger));
+        }
         int scaleInteger = Math.min(output.integerBits() + 2, QFormat.MAX_WORD_LENGTH - 1);
         int scaleFrac = Math.min(output.fractionalBits() + 4, QFormat.MAX_WORD_LENGTH - 1 - scaleInteger);
         Quantizer scale = new Quantizer(QFormat.signed(scaleInteger, scaleFrac), rounding, Overflow.SATURATE);
