@@ -4,6 +4,7 @@ import static dev.fixmod.verify.theory.GaussianTail.q;
 
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
+import dev.fixmod.constellation.Metrics;
 import java.util.Arrays;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
@@ -186,8 +187,9 @@ public final class ErrorRates {
     /** N̄·Q(√(d_min²/(2N0))) with the constellation scaled to its E_s (d_min and N̄ weighted by the probabilities). */
     public static double nearestNeighbourUnionBound(Constellation constellation, double esN0) {
         requireSnr(esN0);
-        Distances d = Distances.of(constellation);
-        return d.averageNeighbours * q(d.minimum * StrictMath.sqrt(esN0 / 2));
+        Metrics metrics = Metrics.of(constellation);
+        double minimumAtUnitEnergy = StrictMath.sqrt(metrics.minDistanceSquared() / metrics.averageEnergy());
+        return metrics.averageNeighbours() * q(minimumAtUnitEnergy * StrictMath.sqrt(esN0 / 2));
     }
 
     /** Σ_i p_i Σ_{j≠i} Q(d_ij/√(2N0)) at E_s = 1 and N0 = 1/(E_s/N0). Cost M² evaluations of Q. */
@@ -205,7 +207,7 @@ public final class ErrorRates {
             double row = 0;
             for (int j = 0; j < re.length; j++) {
                 if (j != i) {
-                    row += q(StrictMath.sqrt(Distances.squaredDistance(re, im, i, j) * scale));
+                    row += q(StrictMath.sqrt(squaredDistance(re, im, i, j) * scale));
                 }
             }
             sum += p * row;
@@ -319,6 +321,12 @@ public final class ErrorRates {
     }
 
     /** distance/σ, keeping an infinite edge infinite when σ is infinite too (E_s/N0 = 0). */
+    private static double squaredDistance(double[] re, double[] im, int i, int j) {
+        double dr = re[i] - re[j];
+        double di = im[i] - im[j];
+        return dr * dr + di * di;
+    }
+
     private static double standardized(double distance, double sigma) {
         return Double.isInfinite(distance) ? distance : distance / sigma;
     }
