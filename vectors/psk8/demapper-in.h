@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set psk8, port demapper-in (stimulus)
- * psk8_demapper_in: 417 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * psk8_demapper_in: 433 rows x 2 fields, int16_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] I: Q1.8 (signed, 10-bit word, 8 fractional bits, range [-2, 1.99609375], LSB 2^-8)
  *   [1] Q: Q1.8 (signed, 10-bit word, 8 fractional bits, range [-2, 1.99609375], LSB 2^-8)
  */
@@ -9,7 +9,7 @@
 
 #include <stdint.h>
 
-#define PSK8_DEMAPPER_IN_ROWS 417
+#define PSK8_DEMAPPER_IN_ROWS 433
 #define PSK8_DEMAPPER_IN_FIELDS 2
 
 static const int16_t psk8_demapper_in[PSK8_DEMAPPER_IN_ROWS][PSK8_DEMAPPER_IN_FIELDS] = {
@@ -421,6 +421,22 @@ static const int16_t psk8_demapper_in[PSK8_DEMAPPER_IN_ROWS][PSK8_DEMAPPER_IN_FI
     {0, -256},
     {-256, 0},
     {-181, -181},
+    {218, 90},
+    {218, 91},
+    {218, -91},
+    {218, -90},
+    {90, 218},
+    {91, 218},
+    {-91, 218},
+    {-90, 218},
+    {-219, 90},
+    {-219, 91},
+    {90, -219},
+    {91, -219},
+    {-91, -219},
+    {-90, -219},
+    {-219, -91},
+    {-219, -90},
     {-512, 0},
     {511, 0},
     {0, -512},

@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set psk8, port hard (expected)
- * psk8_hard: 417 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * psk8_hard: 433 rows x 1 fields, uint8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] label: UQ3.0 (unsigned, 3-bit word, 0 fractional bits, range [0, 7], LSB 1)
  */
 #ifndef FIXMOD_PSK8_HARD_H
@@ -8,7 +8,7 @@
 
 #include <stdint.h>
 
-#define PSK8_HARD_ROWS 417
+#define PSK8_HARD_ROWS 433
 #define PSK8_HARD_FIELDS 1
 
 static const uint8_t psk8_hard[PSK8_HARD_ROWS][PSK8_HARD_FIELDS] = {
@@ -420,6 +420,22 @@ static const uint8_t psk8_hard[PSK8_HARD_ROWS][PSK8_HARD_FIELDS] = {
     {5u},
     {6u},
     {7u},
+    {0u},
+    {1u},
+    {4u},
+    {0u},
+    {3u},
+    {1u},
+    {2u},
+    {3u},
+    {6u},
+    {2u},
+    {5u},
+    {4u},
+    {7u},
+    {5u},
+    {7u},
+    {6u},
     {6u},
     {0u},
     {5u},

@@ -1,6 +1,6 @@
 /*
  * fixmod golden vectors: set psk8, port llr (expected)
- * psk8_llr: 417 rows x 3 fields, int8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
+ * psk8_llr: 433 rows x 3 fields, int8_t each, row-major. A code c of format Qm.n or UQm.n means c * 2^-n.
  *   [0] llr0: Q4.0 (signed, 5-bit word, 0 fractional bits, range [-16, 15], LSB 1)
  *   [1] llr1: Q4.0 (signed, 5-bit word, 0 fractional bits, range [-16, 15], LSB 1)
  *   [2] llr2: Q4.0 (signed, 5-bit word, 0 fractional bits, range [-16, 15], LSB 1)
@@ -10,7 +10,7 @@
 
 #include <stdint.h>
 
-#define PSK8_LLR_ROWS 417
+#define PSK8_LLR_ROWS 433
 #define PSK8_LLR_FIELDS 3
 
 static const int8_t psk8_llr[PSK8_LLR_ROWS][PSK8_LLR_FIELDS] = {
@@ -422,6 +422,22 @@ static const int8_t psk8_llr[PSK8_LLR_ROWS][PSK8_LLR_FIELDS] = {
     {-15, 15, -15},
     {-15, -15, 15},
     {-15, -15, -15},
+    {15, 15, 0},
+    {15, 15, 0},
+    {0, 15, 15},
+    {0, 15, 15},
+    {15, 0, -15},
+    {15, 0, -15},
+    {15, -15, 0},
+    {15, -15, 0},
+    {0, -15, 15},
+    {0, -15, 15},
+    {-15, 15, 0},
+    {-15, 15, 0},
+    {-15, 0, -15},
+    {-15, 0, -15},
+    {-15, -15, 0},
+    {-15, -15, 0},
     {-15, -15, 15},
     {15, 15, 15},
     {-15, 15, -15},

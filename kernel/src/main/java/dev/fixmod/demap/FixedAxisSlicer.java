@@ -4,6 +4,7 @@ import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.DatapathCost;
+import java.util.Arrays;
 
 /**
  * The fixed-point per-axis slicer of a separable constellation (PAM, square and rectangular QAM), as RTL does it:
@@ -119,6 +120,11 @@ public final class FixedAxisSlicer extends FixedSlicer {
     @Override
     int decide(int i, int q, boolean odd) {
         return labelByIndex[levelIndex(i, iThresholds) * qLevelCount + levelIndex(q, qThresholds)];
+    }
+
+    @Override
+    boolean onBoundary(int i, int q, boolean odd) {
+        return Arrays.binarySearch(iThresholds, i) >= 0 || Arrays.binarySearch(qThresholds, q) >= 0;
     }
 
     /** The number of thresholds at or below {@code x}, by binary search. */

@@ -93,4 +93,24 @@ public final class FixedNearestSlicer extends FixedSlicer {
         }
         return (odd ? oddLabels : evenLabels)[best];
     }
+
+    @Override
+    boolean onBoundary(int i, int q, boolean odd) {
+        int[] x = odd ? oddI : evenI;
+        int[] y = odd ? oddQ : evenQ;
+        long bestDistance = Long.MAX_VALUE;
+        int atBest = 0;
+        for (int n = 0; n < x.length; n++) {
+            long di = (long) i - x[n];
+            long dq = (long) q - y[n];
+            long d = di * di + dq * dq;
+            if (d < bestDistance) {
+                bestDistance = d;
+                atBest = 1;
+            } else if (d == bestDistance) {
+                atBest++;
+            }
+        }
+        return atBest > 1;
+    }
 }

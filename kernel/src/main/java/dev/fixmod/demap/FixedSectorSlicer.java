@@ -130,4 +130,15 @@ public final class FixedSectorSlicer extends FixedSlicer {
         }
         return sectorLabel[h - m];
     }
+
+    @Override
+    boolean onBoundary(int i, int q, boolean oddSymbol) {
+        for (long[] line : lines) {
+            long test = oddSymbol ? -line[1] * i + line[0] * q : line[0] * i + line[1] * q;
+            if (test == 0) {
+                return true;
+            }
+        }
+        return false;
+    }
 }

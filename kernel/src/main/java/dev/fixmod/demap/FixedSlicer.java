@@ -85,6 +85,9 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
     /** The label decided for codes {@code i}, {@code q} of a symbol of even ({@code odd == false}) or odd index. */
     abstract int decide(int i, int q, boolean odd);
 
+    /** Whether codes {@code i}, {@code q} of an even or odd symbol lie exactly on a decision boundary. */
+    abstract boolean onBoundary(int i, int q, boolean odd);
+
     /** The operation counts and table bits per symbol of this slicer's datapath. */
     public abstract DatapathCost cost();
 
@@ -111,6 +114,36 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
         }
         ArrayRegions.requireSymbolIndex(symbolIndex);
         return decide(i, q, alternates && (symbolIndex & 1) != 0);
+    }
+
+    /**
+     * Whether one sample lies exactly on a decision boundary of this slicer's integer datapath, so that the tie rule
+     * decides it: a code equal to a threshold (per axis), a code on a quantized sector line (PSK; the origin is on
+     * all of them), a code at equal smallest distance from two or more ROM points (minimum distance). A verification
+     * set uses it to tag the samples that exercise the tie rule.
+     *
+     * <table class="striped">
+     *   <caption>Examples (same constellations and formats as the table above)</caption>
+     *   <thead><tr><th>constellation</th><th>sample (I, Q)</th><th>on a boundary</th></tr></thead>
+     *   <tbody>
+     *     <tr><td>4-PAM</td><td>2.0</td><td>yes: the threshold between +1 and +3</td></tr>
+     *     <tr><td>4-PAM</td><td>1.9375 (one LSB below)</td><td>no</td></tr>
+     *     <tr><td>16-QAM</td><td>(0, 0.5)</td><td>yes: on the I threshold 0</td></tr>
+     *     <tr><td>16-QAM, minimum distance</td><td>(0, 0)</td><td>yes: four points equidistant</td></tr>
+     *     <tr><td>QPSK, points at 45° + n·90°</td><td>(0.5, 0.5)</td><td>no: on a point's ray, not a boundary</td></tr>
+     *     <tr><td>8-PSK, points at n·45°</td><td>(0, 0)</td><td>yes: the origin</td></tr>
+     *   </tbody>
+     * </table>
+     *
+     * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
+     */
+    public final boolean onBoundary(int i, int q, long symbolIndex) {
+        if (i < input.minCode() || i > input.maxCode() || q < input.minCode() || q > input.maxCode()) {
+            throw new IllegalArgumentException("sample (" + i + ", " + q + ") is outside " + input + " (codes "
+                    + input.minCode() + " .. " + input.maxCode() + ")");
+        }
+        ArrayRegions.requireSymbolIndex(symbolIndex);
+        return onBoundary(i, q, alternates && (symbolIndex & 1) != 0);
     }
 
     /**

@@ -176,4 +176,25 @@ class FixedSoftDemapperTest {
             assertEquals(2L * m * 12 + 16, exhaustive.cost().tableBits());
         }
     }
+
+    /**
+     * Regression: a K one ulp below a power of two (1/N0 = 0.9999999999999998 and its kin) rounds up to the power
+     * itself, one code past a format sized by K's integer part; the suggestion must widen K's format by one integer
+     * bit there, and everywhere hold the rounded K.
+     */
+    @Test
+    void theSuggestedScaleConstantHoldsKJustBelowAPowerOfTwo() {
+        for (int p = -3; p <= 6; p++) {
+            // N0 one ulp above 2^-p: K = 1/N0 falls an ulp or two below 2^p (p = 0 gives the case that failed).
+            double n0 = Math.nextUp(Math.scalb(1.0, -p));
+            double k = 1.0 / n0;
+            assertTrue(k < Math.scalb(1.0, p) && k > Math.scalb(1.0 - 1e-15, p), "K = " + k);
+            FixedLlrSpec spec = lossless(SoftAlgorithm.MAX_LOG, GRID16, LlrOptions.of(n0));
+            QFormat kFormat = spec.scaleConstant();
+            double rounded = Rounding.HALF_EVEN.roundToIntegral(Math.scalb(k, kFormat.fractionalBits()));
+            assertTrue(rounded <= kFormat.maxCode(), "K = " + k + " rounds to code " + rounded + ", past "
+                    + kFormat.describe());
+            assertEquals(16, kFormat.wordLength(), "K stays a 16-bit constant: " + kFormat.describe());
+        }
+    }
 }

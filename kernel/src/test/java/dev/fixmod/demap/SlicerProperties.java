@@ -233,6 +233,42 @@ class SlicerProperties {
     }
 
     /** Batch calls equal one call per sample, whatever the chunking and the stream index of the first symbol. */
+    /**
+     * The tie rule sends a sample on a boundary to its +I side (+Q on a boundary parallel to I), so one LSB toward −I
+     * or −Q it is decided otherwise; checked on every code of a small grid, for the default and the minimum-distance
+     * slicer of each family, even and odd symbols.
+     */
+    @Property(tries = 80)
+    void aSampleOnABoundaryIsDecidedUnlikeItsNeighbourTowardMinusIOrMinusQ(@ForAll("everyFamily") String name,
+            @ForAll @IntRange(min = 5, max = 6) int fractionalBits, @ForAll @LongRange(max = 1) long symbolIndex) {
+        ConstellationRom rom;
+        try {
+            rom = SliceFixtures.rom(name, fractionalBits);
+        } catch (IllegalArgumentException tooCoarse) {
+            Assume.that(false);
+            return;
+        }
+        QFormat f = rom.format();
+        for (FixedSlicer slicer : List.of(SliceFixtures.fixedSlicer(name, fractionalBits),
+                SliceFixtures.fixedNearest(name, fractionalBits))) {
+            int onBoundary = 0;
+            for (int i = (int) f.minCode() + 1; i <= f.maxCode(); i++) {
+                for (int q = (int) f.minCode() + 1; q <= f.maxCode(); q++) {
+                    if (!slicer.onBoundary(i, q, symbolIndex)) {
+                        continue;
+                    }
+                    onBoundary++;
+                    int here = slicer.slice(i, q, symbolIndex);
+                    boolean differs = slicer.slice(i - 1, q, symbolIndex) != here
+                            || slicer.slice(i, q - 1, symbolIndex) != here;
+                    assertEquals(true, differs, name + " " + slicer.getClass().getSimpleName() + " on a boundary at ("
+                            + i + ", " + q + ") in " + f);
+                }
+            }
+            Assume.that(onBoundary > 0 || rom.size() == 1);
+        }
+    }
+
     @Property(tries = 200)
     void batchesEqualSingleSlices(@ForAll("everyFamily") String name, @ForAll @IntRange(max = 40) int count,
                                   @ForAll @LongRange(max = 9) long firstSymbol, @ForAll @IntRange(max = 1 << 20) int seed) {

@@ -82,4 +82,24 @@ class TieRuleTest {
         decides(offset8, Q1_6, 0.5, 0.5, 0b000);
         decides(offset8, Q1_6, -1, -1, 0b111);
     }
+
+    /** The examples of the on-boundary table in {@link FixedSlicer#onBoundary}'s documentation. */
+    @Test
+    void boundaryExamples() {
+        Constellation pam = Constellations.pam(4, true);
+        ConstellationRom pamRom = ConstellationRom.of(pam, Q3_4);
+        FixedAxisSlicer pamAxis = new FixedAxisSlicer(pamRom);
+        assertEquals(true, pamAxis.onBoundary(32, 0, 0), "4-PAM at 2.0");
+        assertEquals(false, pamAxis.onBoundary(31, 0, 0), "4-PAM at 1.9375");
+        ConstellationRom qamRom = ConstellationRom.of(Constellations.qam(16, true), Q3_4);
+        assertEquals(true, new FixedAxisSlicer(qamRom).onBoundary(0, 8, 0), "16-QAM at (0, 0.5), per axis");
+        assertEquals(true, new FixedNearestSlicer(qamRom).onBoundary(0, 8, 0), "16-QAM at (0, 0.5), nearest");
+        assertEquals(true, new FixedNearestSlicer(qamRom).onBoundary(0, 0, 0), "16-QAM at (0, 0), nearest");
+        Constellation qpsk = Constellations.psk(4, StrictMath.PI / 4, true);
+        assertEquals(false, new FixedSectorSlicer(qpsk, Q1_6.format(), Slicers.DEFAULT_SECTOR_COEFFICIENTS)
+                .onBoundary(32, 32, 0), "QPSK at (0.5, 0.5)");
+        Constellation psk8 = Constellations.psk(8, 0, true);
+        assertEquals(true, new FixedSectorSlicer(psk8, Q1_6.format(), Slicers.DEFAULT_SECTOR_COEFFICIENTS)
+                .onBoundary(0, 0, 0), "8-PSK at the origin");
+    }
 }

@@ -45,7 +45,9 @@ final class CornerCases {
         long max = input.maxCode();
         long[] pi = d.referenceI();
         long[] pq = d.referenceQ();
-        if (groups.contains(CornerGroup.THRESHOLDS)) {
+        if (groups.contains(CornerGroup.THRESHOLDS) && d.thresholdsI().length + d.thresholdsQ().length == 0) {
+            addBoundaryCrossings(d, input, pi, pq, add);
+        } else if (groups.contains(CornerGroup.THRESHOLDS)) {
             // The other coordinate sits on the first point's level, away from the thresholds of its own axis.
             for (long t : d.thresholdsI()) {
                 add.add(t, pq[0], CornerFlag.ON_THRESHOLD.mask());
@@ -91,6 +93,119 @@ final class CornerCases {
     @FunctionalInterface
     private interface Adder {
         void add(long i, long q, int flags);
+    }
+
+    /**
+     * The threshold group of a slicer without per-axis thresholds (PSK sectors, minimum distance), whose boundaries
+     * are lines at any angle. For each pair of neighbouring reference points a &lt; b (every other point is farther
+     * from their midpoint, by a margin that excludes pairs meeting only at a corner of their regions), the line
+     * through the midpoint along the axis on which b − a is longer (I when equal) is bisected between a's and b's
+     * ends down to two adjacent codes, one decided a and one decided b. If one of the two lies exactly on the
+     * boundary ({@link Datapath#onBoundary}) it is flagged on-threshold and its neighbours either side one LSB below
+     * and above; otherwise the lower code (on that axis) is flagged one LSB below and the upper one LSB above. A pair
+     * whose line passes through a third point's region at a probe is left out.
+     */
+    private static void addBoundaryCrossings(Datapath d, QFormat input, long[] pi, long[] pq, Adder add) {
+        int m = pi.length;
+        int[] decided = new int[1];
+        for (int a = 0; a < m; a++) {
+            for (int b = a + 1; b < m; b++) {
+                if (!neighbours(pi, pq, a, b)) {
+                    continue;
+                }
+                boolean alongI = Math.abs(pi[b] - pi[a]) >= Math.abs(pq[b] - pq[a]);
+                long other = Math.floorDiv(alongI ? pq[a] + pq[b] : pi[a] + pi[b], 2);
+                long[] crossing = bisect(d, input, alongI, other, alongI ? pi[a] : pq[a], a,
+                        alongI ? pi[b] : pq[b], b, decided);
+                if (crossing == null) {
+                    continue;
+                }
+                long lower = Math.min(crossing[0], crossing[1]);
+                long upper = lower + 1;
+                int on = CornerFlag.ON_THRESHOLD.mask();
+                int minus = CornerFlag.THRESHOLD_MINUS_LSB.mask();
+                int plus = CornerFlag.THRESHOLD_PLUS_LSB.mask();
+                if (onBoundary(d, alongI, other, upper)) {
+                    addOnAxis(add, alongI, other, lower, minus);
+                    addOnAxis(add, alongI, other, upper, on);
+                    addOnAxis(add, alongI, other, upper + 1, plus);
+                } else if (onBoundary(d, alongI, other, lower)) {
+                    addOnAxis(add, alongI, other, lower - 1, minus);
+                    addOnAxis(add, alongI, other, lower, on);
+                    addOnAxis(add, alongI, other, upper, plus);
+                } else {
+                    addOnAxis(add, alongI, other, lower, minus);
+                    addOnAxis(add, alongI, other, upper, plus);
+                }
+            }
+        }
+    }
+
+    /** Whether every point other than a and b is farther from their midpoint than a and b are, by 1/16 in d². */
+    private static boolean neighbours(long[] pi, long[] pq, int a, int b) {
+        double halfI = pi[b] - pi[a];
+        double halfQ = pq[b] - pq[a];
+        double toEnds = halfI * halfI + halfQ * halfQ;
+        for (int c = 0; c < pi.length; c++) {
+            if (c == a || c == b) {
+                continue;
+            }
+            // Doubled coordinates keep the midpoint on integers.
+            double di = pi[a] + pi[b] - 2.0 * pi[c];
+            double dq = pq[a] + pq[b] - 2.0 * pq[c];
+            if (16 * (di * di + dq * dq) <= 17 * toEnds) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Two adjacent codes on the axis line at {@code other}, decided {@code labelA} and {@code labelB}, found by
+     * bisection from {@code fromA} (a's end) to {@code toB}; null when an end or a probe is decided otherwise.
+     */
+    private static long[] bisect(Datapath d, QFormat input, boolean alongI, long other, long fromA, int labelA,
+            long toB, int labelB, int[] decided) {
+        long lo = clamp(fromA, input);
+        long hi = clamp(toB, input);
+        if (decide(d, alongI, other, lo, decided) != labelA || decide(d, alongI, other, hi, decided) != labelB) {
+            return null;
+        }
+        while (Math.abs(hi - lo) > 1) {
+            long mid = Math.floorDiv(lo + hi, 2);
+            int label = decide(d, alongI, other, mid, decided);
+            if (label == labelA) {
+                lo = mid;
+            } else if (label == labelB) {
+                hi = mid;
+            } else {
+                return null;
+            }
+        }
+        return lo == hi ? null : new long[] {lo, hi};
+    }
+
+    private static long clamp(long code, QFormat input) {
+        return Math.max(input.minCode(), Math.min(input.maxCode(), code));
+    }
+
+    private static int decide(Datapath d, boolean alongI, long other, long x, int[] decided) {
+        long[] i = {alongI ? x : other};
+        long[] q = {alongI ? other : x};
+        d.slice(i, q, 1, 0, decided);
+        return decided[0];
+    }
+
+    private static boolean onBoundary(Datapath d, boolean alongI, long other, long x) {
+        return alongI ? d.onBoundary(x, other) : d.onBoundary(other, x);
+    }
+
+    private static void addOnAxis(Adder add, boolean alongI, long other, long x, int flags) {
+        if (alongI) {
+            add.add(x, other, flags);
+        } else {
+            add.add(other, x, flags);
+        }
     }
 
     /**

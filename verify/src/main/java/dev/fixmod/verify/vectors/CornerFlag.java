@@ -10,9 +10,13 @@ package dev.fixmod.verify.vectors;
  *   <tbody>
  *     <tr><td>0</td><td>noisy</td><td>channel noise added (the level is in the CSV)</td></tr>
  *     <tr><td>1</td><td>label-sweep</td><td>every label once, without noise</td></tr>
- *     <tr><td>2</td><td>on-threshold</td><td>a coordinate exactly on a decision threshold</td></tr>
- *     <tr><td>3</td><td>threshold-minus-lsb</td><td>a coordinate one LSB below a threshold</td></tr>
- *     <tr><td>4</td><td>threshold-plus-lsb</td><td>a coordinate one LSB above a threshold</td></tr>
+ *     <tr><td>2</td><td>on-threshold</td><td>exactly on a decision boundary: a coordinate on a per-axis threshold,
+ *         or the sample on a PSK sector line or equidistant from the two points either side</td></tr>
+ *     <tr><td>3</td><td>threshold-minus-lsb</td><td>one LSB below a boundary, on the axis it is crossed along (a
+ *         per-axis threshold's own axis); where no code lies on a sloped boundary, the lower of the two codes
+ *         straddling it</td></tr>
+ *     <tr><td>4</td><td>threshold-plus-lsb</td><td>one LSB above a boundary, likewise (the upper straddling code)
+ *         </td></tr>
  *     <tr><td>5</td><td>tie</td><td>exactly equidistant from two nearest points</td></tr>
  *     <tr><td>6</td><td>min-code</td><td>a coordinate at the most negative code</td></tr>
  *     <tr><td>7</td><td>max-code</td><td>a coordinate at the most positive code</td></tr>
@@ -27,9 +31,12 @@ package dev.fixmod.verify.vectors;
 public enum CornerFlag {
     NOISY("noisy", "channel noise added; the noise level is in the CSV column 'level'"),
     LABEL_SWEEP("label-sweep", "every label once, mapped without noise"),
-    ON_THRESHOLD("on-threshold", "a coordinate exactly on a decision threshold of the slicer"),
-    THRESHOLD_MINUS_LSB("threshold-minus-lsb", "a coordinate one LSB below a decision threshold"),
-    THRESHOLD_PLUS_LSB("threshold-plus-lsb", "a coordinate one LSB above a decision threshold"),
+    ON_THRESHOLD("on-threshold", "exactly on a decision boundary of the slicer: a coordinate on a per-axis"
+            + " threshold, or the sample on a PSK sector line or equidistant from the two points either side"),
+    THRESHOLD_MINUS_LSB("threshold-minus-lsb", "one LSB below a decision boundary on the axis it is crossed along;"
+            + " on a sloped boundary with no code on it, the lower of the two codes straddling it"),
+    THRESHOLD_PLUS_LSB("threshold-plus-lsb", "one LSB above a decision boundary on the axis it is crossed along;"
+            + " on a sloped boundary with no code on it, the upper of the two codes straddling it"),
     TIE("tie", "exactly equidistant from two nearest constellation points (the tie rule decides)"),
     MIN_CODE("min-code", "a coordinate at the most negative code of the demapper input format"),
     MAX_CODE("max-code", "a coordinate at the most positive code of the demapper input format"),

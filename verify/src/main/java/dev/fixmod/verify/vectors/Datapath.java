@@ -45,6 +45,9 @@ interface Datapath {
     /** Hard decisions: the label the slicer picks for each input. */
     void slice(long[] i, long[] q, int count, long firstSymbol, int[] labels);
 
+    /** Whether an input (of an even symbol) lies exactly on a decision boundary of the fixed slicer. */
+    boolean onBoundary(long i, long q);
+
     /** Fixed LLRs, {@code k} codes per input in the requested sign convention; returns the overflow events. */
     long llr(long[] i, long[] q, int count, int level, long[] llr);
 

@@ -165,6 +165,11 @@ final class KernelDatapath implements Datapath {
     }
 
     @Override
+    public boolean onBoundary(long i, long q) {
+        return slicer.onBoundary(Math.toIntExact(i), Math.toIntExact(q), 0);
+    }
+
+    @Override
     public long llr(long[] i, long[] q, int count, int level, long[] llr) {
         FixedSoftDemapper d = fixed.get()[level + 1];
         int k = bitsPerSymbol();
