@@ -43,6 +43,13 @@ import picocli.CommandLine.Spec;
                 "With two folders and no --dut, compares every port of two sets (regression between versions)."},
         footer = {"", "Alignment: --skip words are dropped first, then leading x/z words, then the latency",
                 "(--latency, or the best in 0..--align-window scored on --align-prefix vectors).",
+                "",
+                "Examples:",
+                "  fixmod compare vectors/nr-qam16 --port llr --dut llr_dump.hex",
+                "  fixmod compare vectors/nr-qam16 --port llr --dut llr_dump.hex --align-window 16 --tolerance '*=1'",
+                "  fixmod compare golden.hex --layout i:Q1.6,q:Q1.6 --dut out.bin --dut-format bin --json",
+                "  fixmod compare old-set new-set --quiet",
+                "",
                 "Exit status: 0 all agree, 1 mismatches, 2 bad usage or malformed file (named with its line)."})
 public final class CompareCommand implements Callable<Integer> {
 

@@ -55,7 +55,7 @@ import picocli.CommandLine.Spec;
         footer = {"",
             "Examples:",
             "  fixmod demap -c qam16 --sample 0.3,-0.7 --n0 0.1",
-            "  fixmod demap -c nr:qam64 --codes 210,-73 --input-format Q2.9 --esn0 12 --output Q5.0,half-up,saturate",
+            "  fixmod demap -c nr:qam64 --codes 210,-73 --input-format Q2.9 --esn0 12 --llr Q5.0,half-up,saturate",
             "  fixmod demap -c qam16 --sample 1.2,0.1 --esn0 8 --scaling unscaled --metric Q3.9,floor,saturate",
             "  fixmod demap -c psk8 --sample 0.7,0.2 --esn0 6 --json",
             "",
@@ -86,7 +86,7 @@ public final class DemapCommand implements Callable<Integer> {
 
     @Option(names = "--shaping", paramLabel = "LAMBDA", defaultValue = "0",
             description = "Maxwell-Boltzmann shaping: p(s) proportional to exp(-LAMBDA |s|^2) (default: 0).")
-    String shaping;
+    double shaping;
 
     @Option(names = "--sample", paramLabel = "I,Q",
             description = "The received sample as real numbers (Q may be left out for PAM).")
@@ -117,9 +117,9 @@ public final class DemapCommand implements Callable<Integer> {
     @Option(names = "--no-priors", description = "Ignore the constellation's symbol probabilities.")
     boolean noPriors;
 
-    @Option(names = "--output", paramLabel = "STAGE", defaultValue = "Q4.1,half-even,symmetric-saturate",
-            description = "Fixed LLR output stage (default: ${DEFAULT-VALUE}).")
-    String output;
+    @Option(names = "--llr", paramLabel = "STAGE", defaultValue = "Q4.1,half-even,symmetric-saturate",
+            description = "Fixed LLR output stage, as the specs' \"llr\" key (default: ${DEFAULT-VALUE}).")
+    String llrStage;
 
     @Option(names = "--metric", paramLabel = "STAGE", description = "Metric stage, e.g. Q6.12,half-even,saturate.")
     String metric;
@@ -156,7 +156,7 @@ public final class DemapCommand implements Callable<Integer> {
     private Report compute() {
         Catalogue.Options options = Catalogue.Options.DEFAULT
                 .withNormalization(Normalization.fromName(normalization))
-                .withShaping(number("--shaping", shaping));
+                .withShaping(finite("--shaping", shaping));
         if (labeling != null) {
             options = options.withLabeling(Labeling.fromName(labeling));
         }
@@ -216,7 +216,7 @@ public final class DemapCommand implements Callable<Integer> {
             }
             r.floats.add(row);
         }
-        Quantizer out = stage("--output", output);
+        Quantizer out = stage("--llr", llrStage);
         for (SoftAlgorithm a : FIXED_ALGORITHMS) {
             FixedRow row = new FixedRow(a);
             FixedLlrSpec fixedSpec;
@@ -293,6 +293,13 @@ public final class DemapCommand implements Callable<Integer> {
         }
         if (!Double.isFinite(v)) {
             throw new UsageException(option + ": " + text.trim() + " is not a finite number");
+        }
+        return v;
+    }
+
+    private static double finite(String option, double v) {
+        if (!Double.isFinite(v)) {
+            throw new UsageException(option + ": " + v + " is not a finite number");
         }
         return v;
     }

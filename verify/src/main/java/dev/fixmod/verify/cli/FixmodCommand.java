@@ -1,6 +1,8 @@
 package dev.fixmod.verify.cli;
 
 import java.io.PrintWriter;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -15,11 +17,18 @@ import picocli.CommandLine.Command;
                 ConstellationCommand.class,
                 LossCommand.class,
                 CompareCommand.class,
+                DemoCommand.class,
                 DemapCommand.class,
                 VectorsCommand.class,
                 BenchCommand.class,
         },
-        footer = {"", "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
+        footer = {"", "Examples:",
+                "  fixmod constellation nr:qam64",
+                "  fixmod vectors generate spec.json -o vectors/my-set",
+                "  fixmod compare vectors/my-set --port llr --dut llr_dump.hex",
+                "  fixmod help compare",
+                "",
+                "Exit status: 0 success, 1 mismatches found, 2 bad input or usage.",
                 "Results are engineering models, not conformance certification; the governing standard's text decides."})
 public final class FixmodCommand implements Runnable {
 
@@ -37,6 +46,8 @@ public final class FixmodCommand implements Runnable {
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // Colour only on a terminal: AUTO turns ANSI codes off when stdout is a pipe, a file or a test's writer.
+        cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.AUTO));
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             String who = "fixmod" + (qualifiedName(commandLine).isEmpty() ? "" : " " + qualifiedName(commandLine));
             if (ex instanceof UsageException || ex instanceof IllegalArgumentException) {
@@ -51,14 +62,38 @@ public final class FixmodCommand implements Runnable {
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
             String name = qualifiedName(c);
-            return fail(c, "fixmod" + (name.isEmpty() ? "" : " " + name) + ": " + ex.getMessage()
+            String message = ex.getMessage();
+            // A mistyped option also leaves its command's required parameters unfilled; name the cause, not the effect.
+            if (!(ex instanceof CommandLine.UnmatchedArgumentException) && !c.getUnmatchedArguments().isEmpty()) {
+                message = new CommandLine.UnmatchedArgumentException(c, c.getUnmatchedArguments()).getMessage();
+            }
+            return fail(c, "fixmod" + (name.isEmpty() ? "" : " " + name) + ": " + message
                     + " (see 'fixmod" + (name.isEmpty() ? "" : " " + name) + " --help')", ExitStatus.USAGE);
         });
         return cl;
     }
 
+    /** Quoted input longer than this is abbreviated in a message, so that one line stays readable. */
+    private static final int MAX_QUOTED = 60;
+    /** The longest message printed; hostile input must not turn one line into a megabyte. */
+    private static final int MAX_MESSAGE = 1000;
+    private static final Pattern LONG_QUOTE = Pattern.compile("'([^'\\n]{" + MAX_QUOTED + "})([^'\\n]+)'");
+
+    /** One line of bounded length: newlines folded, long quoted input abbreviated with its length. */
+    static String oneLine(String message) {
+        Matcher m = LONG_QUOTE.matcher(message);
+        StringBuilder sb = new StringBuilder();
+        while (m.find()) {
+            int length = m.group(1).length() + m.group(2).length();
+            m.appendReplacement(sb, Matcher.quoteReplacement("'" + m.group(1) + "...' (" + length + " characters)"));
+        }
+        m.appendTail(sb);
+        String line = sb.toString().replaceAll("\\s*\\R\\s*", " ").strip();
+        return line.length() <= MAX_MESSAGE ? line : line.substring(0, MAX_MESSAGE - 3) + "...";
+    }
+
     private static int fail(CommandLine c, String message, int status) {
-        c.getErr().println(message);
+        c.getErr().println(oneLine(message));
         c.getErr().flush();
         return status;
     }

@@ -34,7 +34,13 @@ import picocli.CommandLine.Parameters;
         subcommands = {LossCommand.Merge.class},
         description = {"Simulates the float reference and the fixed-point model on the same noise and writes"
                 + " report.md, report.html, results.json and results.csv into a new folder.",
-                "Without SPEC, runs the built-in 16-QAM demo specification."})
+                "Without SPEC, runs the built-in 16-QAM demo specification."},
+        footer = {"", "Examples:",
+                "  fixmod loss verify/src/main/resources/examples/crane-link-16qam.json -o loss-report",
+                "  fixmod loss -o demo-report --threads 2 --quiet",
+                "  fixmod loss my-spec.json --shard 1/2 -o part1.json",
+                "",
+                "Exit status: 0 success, 2 bad specification or usage (nothing is written)."})
 public final class LossCommand implements Callable<Integer> {
     private static final Pattern SHARD = Pattern.compile("(\\d{1,6})/(\\d{1,6})");
 
@@ -48,15 +54,16 @@ public final class LossCommand implements Callable<Integer> {
             description = "The report folder (must not exist unless --force); with --shard, the partial result file.")
     Path output;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores)."
-            + " Results do not depend on it.")
-    Integer threads;
+    /** 0 stands for "all cores"; picocli gives the same int type as every other command's --threads. */
+    @Option(names = "--threads", paramLabel = "N", defaultValue = "0", description = "Worker threads (default:"
+            + " all cores). Results do not depend on it.")
+    int threads;
 
     @Option(names = "--shard", paramLabel = "I/N", description = "Run only part I of N of the points (round robin)"
             + " and write a partial result for 'fixmod loss merge'.")
     String shard;
 
-    @Option(names = "--quiet", description = "No progress bar.")
+    @Option(names = {"-q", "--quiet"}, description = "No progress bar.")
     boolean quiet;
 
     @Option(names = "--force", description = "Replace an existing output.")
@@ -78,9 +85,9 @@ public final class LossCommand implements Callable<Integer> {
         }
         LossSpec loss = LossSpecReader.parse(text, source);
         LossRun run = new LossRun(loss);
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        int n = threads == 0 ? Runtime.getRuntime().availableProcessors() : threads;
         if (n < 1 || n > 1024) {
-            throw new UsageException("--threads must be from 1 to 1024, got " + n);
+            throw new UsageException("--threads must be from 1 to 1024 (or 0 for all cores), got " + n);
         }
         if (shard != null) {
             Matcher m = SHARD.matcher(shard);
@@ -152,7 +159,11 @@ public final class LossCommand implements Callable<Integer> {
     /** {@code fixmod loss merge}: combines the partial results of every shard into the full report. */
     @Command(name = "merge", mixinStandardHelpOptions = true,
             description = "Combines the partial results of 'fixmod loss SPEC --shard i/n' (all n of them) into the"
-                    + " report an unsharded run writes.")
+                    + " report an unsharded run writes.",
+            footer = {"", "Examples:",
+                    "  fixmod loss merge part1.json part2.json -o loss-report-merged",
+                    "",
+                    "Exit status: 0 success, 2 missing, duplicate or foreign parts or bad usage (nothing is written)."})
     static final class Merge implements Callable<Integer> {
         @CommandLine.Spec
         CommandLine.Model.CommandSpec spec;

@@ -27,10 +27,16 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code fixmod vectors}: generate, check and list golden vector sets. */
-@Command(name = "vectors", mixinStandardHelpOptions = true,
+@Command(name = "vectors",
+        mixinStandardHelpOptions = true,
         description = "Golden vector sets: stimulus and expected outputs per port, for RTL, C and Python testbenches.",
         subcommands = {VectorsCommand.Generate.class, VectorsCommand.Check.class, VectorsCommand.ListSets.class},
-        footer = {"", "Exit status: 0 success, 1 differences found (check), 2 bad input or usage.",
+        footer = {"", "Examples:",
+                "  fixmod vectors generate vectors/nr-qam16.json -o my-set",
+                "  fixmod vectors check vectors/nr-qam16",
+                "  fixmod vectors list",
+                "",
+                "Exit status: 0 success, 1 differences found (check), 2 bad input or usage.",
                 "The format reference is vectors/README.md."})
 public final class VectorsCommand implements Runnable {
     @CommandLine.Spec
@@ -55,7 +61,12 @@ public final class VectorsCommand implements Runnable {
     }
 
     @Command(name = "generate", mixinStandardHelpOptions = true,
-            description = "Generate a vector set from a specification into a new folder (written atomically).")
+            description = "Generate a vector set from a specification into a new folder (written atomically).",
+            footer = {"", "Examples:",
+                    "  fixmod vectors generate vectors/nr-qam16.json -o my-set",
+                    "  fixmod vectors generate my-spec.json -o my-set --force --quiet --threads 2",
+                    "",
+                    "Exit status: 0 success, 2 bad specification or usage (nothing is written)."})
     static final class Generate implements Callable<Integer> {
         @CommandLine.Spec
         CommandLine.Model.CommandSpec cs;
@@ -70,7 +81,7 @@ public final class VectorsCommand implements Runnable {
         @Option(names = "--force", description = "replace an existing set at DIR")
         boolean force;
 
-        @Option(names = "--quiet", description = "no progress bar, no summary")
+        @Option(names = {"-q", "--quiet"}, description = "no progress bar, no summary")
         boolean quiet;
 
         @Option(names = "--threads", paramLabel = "N", defaultValue = "1",
@@ -108,7 +119,11 @@ public final class VectorsCommand implements Runnable {
     }
 
     @Command(name = "check", mixinStandardHelpOptions = true,
-            description = "Verify a set: checksums, internal consistency, and regeneration compared byte for byte.")
+            description = "Verify a set: checksums, internal consistency, and regeneration compared byte for byte.",
+            footer = {"", "Examples:",
+                    "  fixmod vectors check vectors/nr-qam16",
+                    "",
+                    "Exit status: 0 the set is intact, 1 differences found, 2 not a readable set."})
     static final class Check implements Callable<Integer> {
         @CommandLine.Spec
         CommandLine.Model.CommandSpec cs;
@@ -135,7 +150,12 @@ public final class VectorsCommand implements Runnable {
     }
 
     @Command(name = "list", mixinStandardHelpOptions = true,
-            description = "List the committed sets under vectors/, or the files of one set.")
+            description = "List the committed sets under vectors/, or the files of one set.",
+            footer = {"", "Examples:",
+                    "  fixmod vectors list",
+                    "  fixmod vectors list vectors/nr-qam16",
+                    "",
+                    "Exit status: 0 success, 2 not a folder or a malformed manifest."})
     static final class ListSets implements Callable<Integer> {
         @CommandLine.Spec
         CommandLine.Model.CommandSpec cs;

@@ -110,6 +110,9 @@ public final class CsvWordReader extends WordReader {
             }
             long code;
             try {
+                if (!cell.chars().allMatch(ch -> ch < 128)) {
+                    throw new NumberFormatException(cell); // Long.parseLong would take any Unicode digit
+                }
                 code = Long.parseLong(cell);
             } catch (NumberFormatException e) {
                 throw new DumpFormatException(source + ":" + line + ": column '" + field.name() + "' holds '" + cell

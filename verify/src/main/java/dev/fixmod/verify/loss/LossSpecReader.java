@@ -72,6 +72,12 @@ public final class LossSpecReader {
 
     private static final int MAX_POINTS = 64;
     private static final int MAX_SWEEP_VALUES = 32;
+    private static final int MAX_SWEEPS = 8;
+    /**
+     * Most bits one run may simulate over all its points (points x max-bits, rounded up to whole chunks): about ten
+     * minutes on two cores. A spec that asks for more would run for hours; it is refused before anything runs.
+     */
+    static final long MAX_RUN_BITS = 10_000_000_000L;
 
     private final String source;
     private final Map<String, JsonLocation> locations;
@@ -217,9 +223,13 @@ public final class LossSpecReader {
             throw error(p + "/sizing", "unknown sizing measure '" + sizing + "'; expected gmi or ber");
         }
         double operating = number(t, p, "operating-eb-n0-db", grid.get(grid.size() / 2));
+        if (operating < -20 || operating > 60) {
+            throw error(p + "/operating-eb-n0-db", operating + " dB is out of range; expected -20 to 60 dB");
+        }
         LossSpec.Targets targets = new LossSpec.Targets(ber, gmi, budget, sizing, operating);
 
         List<LossSpec.Sweep> sweeps = sweeps(top, base);
+        bounded(simulation, grid.size(), sweeps, k);
         validate(base, "/demapper", grid, constellation, rate);
         for (int i = 0; i < sweeps.size(); i++) {
             for (int j = 0; j < sweeps.get(i).designs().size(); j++) {
@@ -227,6 +237,22 @@ public final class LossSpecReader {
             }
         }
         return new LossSpec(name, description, base, grid, rate, seed, gaussian, simulation, targets, sweeps);
+    }
+
+    /** Refuses a run whose worst case (every point to max-bits) exceeds {@link #MAX_RUN_BITS}. */
+    private void bounded(LossSpec.Simulation sim, int levels, List<LossSpec.Sweep> sweeps, int bitsPerSymbol) {
+        long designs = 1;
+        for (LossSpec.Sweep s : sweeps) {
+            designs += s.designs().size();
+        }
+        long chunkBits = (long) sim.chunkSymbols() * bitsPerSymbol;
+        long perPoint = (sim.maxBits() + chunkBits - 1) / chunkBits * chunkBits;
+        long points = designs * levels;
+        if (perPoint > MAX_RUN_BITS / points) {
+            throw error("/simulation/max-bits", "the run could simulate " + points + " points x " + perPoint
+                    + " bits, more than the limit of " + MAX_RUN_BITS + " bits per run (hours of work); lower max-bits,"
+                    + " the number of Eb/N0 points or sweep values, or split the sweep over several specifications");
+        }
     }
 
     /** Builds every datapath the run will build, so that a design that cannot be built is reported here. */
@@ -309,6 +335,9 @@ public final class LossSpecReader {
         }
         if (!arr.isArray()) {
             throw error("/sweep", "expected an array of {\"parameter\": ..., \"values\": [...]}, got " + kind(arr));
+        }
+        if (arr.size() > MAX_SWEEPS) {
+            throw error("/sweep", arr.size() + " sweeps; expected at most " + MAX_SWEEPS);
         }
         for (int i = 0; i < arr.size(); i++) {
             String p = "/sweep/" + i;

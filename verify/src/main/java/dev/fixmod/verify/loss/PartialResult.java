@@ -20,6 +20,8 @@ import java.util.List;
 public record PartialResult(String specText, String specSource, int shard, int shards, List<PointResult> points) {
     public static final String SCHEMA = "fixmod-loss-partial";
     public static final int VERSION = 1;
+    private static final List<String> TOP_KEYS =
+            List.of("schema", "version", "shard", "shards", "spec-source", "spec", "points");
 
     public PartialResult {
         points = List.copyOf(points);
@@ -76,6 +78,13 @@ public record PartialResult(String specText, String specSource, int shard, int s
             if (root == null || !root.isObject() || !SCHEMA.equals(root.path("schema").asText())) {
                 throw new IllegalArgumentException(source + ": not a partial loss result (schema \"" + SCHEMA
                         + "\" expected); give the files written by 'fixmod loss SPEC --shard i/n -o FILE'");
+            }
+            for (java.util.Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
+                String k = it.next();
+                if (!TOP_KEYS.contains(k)) {
+                    throw new IllegalArgumentException(source + ": unknown key \"" + k + "\"; a partial result has "
+                            + String.join(", ", TOP_KEYS) + " (was it edited?)");
+                }
             }
             if (root.path("version").asInt() != VERSION) {
                 throw new IllegalArgumentException(source + ": version " + root.path("version").asText()

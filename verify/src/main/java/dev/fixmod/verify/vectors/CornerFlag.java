@@ -2,7 +2,7 @@ package dev.fixmod.verify.vectors;
 
 /**
  * The flags a vector carries: bit {@link #bit()} of its flags word is set when the vector exercises the case. The
- * manifest holds this glossary; the CSV files and the C header carry each vector's flags word.
+ * manifest holds this glossary; the CSV files list each vector's flags by name, joined by {@code |}.
  *
  * <table class="striped">
  *   <caption>Flags</caption>

@@ -1,5 +1,7 @@
 package dev.fixmod.verify.vectors;
 
+import dev.fixmod.names.TradeNamed;
+
 /** The groups of corner-case vectors a specification may ask for (key {@code corner-cases}); all by default. */
 public enum CornerGroup implements TradeNamed {
     /** Every label once, mapped and demapped without noise. */

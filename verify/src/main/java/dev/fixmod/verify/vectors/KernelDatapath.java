@@ -41,8 +41,7 @@ final class KernelDatapath implements Datapath {
         this.rom = ConstellationRom.of(constellation, spec.mapper());
         this.mapper = new FixedMapper(rom);
         this.input = spec.demapper().input();
-        this.reference = ConstellationRom.of(constellation, new Quantizer(input.format(),
-                spec.demapper().constantRounding(), Overflow.SATURATE));
+        this.reference = spec.demapper().reference(constellation);
         this.slicer = Slicers.fixedFor(reference);
         int k = constellation.bitsPerSymbol();
         int levels = spec.noise().levelsDb().size();
@@ -162,32 +161,31 @@ final class KernelDatapath implements Datapath {
 
     @Override
     public void slice(long[] i, long[] q, int count, long firstSymbol, int[] labels) {
-        int[] ii = new int[count];
-        int[] qq = new int[count];
-        for (int n = 0; n < count; n++) {
-            ii[n] = (int) i[n];
-            qq[n] = (int) q[n];
-        }
-        slicer.sliceLabels(ii, qq, 0, count, firstSymbol, labels, 0);
+        slicer.sliceLabels(narrow(i, count), narrow(q, count), 0, count, firstSymbol, labels, 0);
     }
 
     @Override
     public long llr(long[] i, long[] q, int count, int level, long[] llr) {
         FixedSoftDemapper d = fixed.get()[level + 1];
-        int k = d.bitsPerSymbol();
-        int[] ii = new int[count];
-        int[] qq = new int[count];
+        int k = bitsPerSymbol();
+        int[] ii = narrow(i, count);
+        int[] qq = narrow(q, count);
         int[] out = new int[count * k];
-        for (int n = 0; n < count; n++) {
-            ii[n] = (int) i[n];
-            qq[n] = (int) q[n];
-        }
         long before = events(d);
         d.llr(ii, qq, 0, count, out, 0);
         for (int n = 0; n < count * k; n++) {
             llr[n] = out[n];
         }
         return events(d) - before;
+    }
+
+    /** Codes of a format of at most 32 bits, as the kernel's int batch methods take them. */
+    private static int[] narrow(long[] v, int count) {
+        int[] out = new int[count];
+        for (int n = 0; n < count; n++) {
+            out[n] = Math.toIntExact(v[n]);
+        }
+        return out;
     }
 
     private static long events(FixedSoftDemapper d) {

@@ -1,5 +1,7 @@
 package dev.fixmod.verify.vectors;
 
+import dev.fixmod.names.TradeNamed;
+
 /** Which signal-to-noise ratio the noise levels of a specification are given in. */
 public enum NoiseMeasure implements TradeNamed {
     /** Symbol energy to noise density, E_s/N0 in dB (key {@code es-n0-db}). */

@@ -10,8 +10,8 @@ package dev.fixmod.verify.vectors;
  *   <thead><tr><th>port</th><th>group</th><th>role</th><th>fields (hex word, most significant first)</th></tr></thead>
  *   <tbody>
  *     <tr><td>bits</td><td>mapper</td><td>stimulus</td><td>label (k bits, b0 = MSB)</td></tr>
- *     <tr><td>mapper-out</td><td>mapper</td><td>expected</td><td>i, q (mapper format)</td></tr>
- *     <tr><td>demapper-in</td><td>demapper</td><td>stimulus</td><td>i, q (demapper input format)</td></tr>
+ *     <tr><td>mapper-out</td><td>mapper</td><td>expected</td><td>I, Q (mapper format)</td></tr>
+ *     <tr><td>demapper-in</td><td>demapper</td><td>stimulus</td><td>I, Q (demapper input format)</td></tr>
  *     <tr><td>hard</td><td>demapper</td><td>expected</td><td>label (k bits)</td></tr>
  *     <tr><td>llr</td><td>demapper</td><td>expected</td><td>llr0 … llr(k−1) (LLR format), llr0 = bit b0</td></tr>
  *   </tbody>

@@ -12,6 +12,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.fixmod.bits.Prbs;
+import dev.fixmod.names.TradeNamed;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Normalization;
 import dev.fixmod.demap.FixedLlrSpec;
@@ -21,11 +22,11 @@ import dev.fixmod.demap.LlrScaling;
 import dev.fixmod.demap.LlrSign;
 import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.demap.SoftDemapper;
+import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.fixed.Rounding;
-import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.verify.formats.FileFormat;
 import java.io.IOException;
 import java.util.ArrayList;
@@ -217,12 +218,11 @@ public final class SpecReader {
             esN0 = Math.max(esN0, noise.esN0Db(l, k));
         }
         LlrOptions options = LlrOptions.fromEsN0Db(resolved, esN0, sign, false);
-        // The datapath's reference points share the input format, quantized with the constant rounding.
-        ConstellationRom referenceRom = ConstellationRom.of(resolved,
-                new Quantizer(input.format(), constants, Overflow.SATURATE));
         FixedLlrSpec suggested;
+        ConstellationRom points;
         try {
-            suggested = FixedLlrSpec.suggested(algorithm, referenceRom, options, outputFormat);
+            points = ConstellationRom.of(resolved, new Quantizer(input.format(), constants, Overflow.SATURATE));
+            suggested = FixedLlrSpec.suggested(algorithm, points, options, outputFormat);
         } catch (IllegalArgumentException e) {
             throw error(d.has("algorithm") ? p + "/algorithm" : p, e.getMessage());
         }
@@ -259,7 +259,7 @@ public final class SpecReader {
             }
             for (double level : levels) {
                 LlrOptions o = LlrOptions.fromEsN0Db(resolved, level, sign, false);
-                FixedSoftDemapper.create(algorithm, referenceRom, o, fixed);
+                FixedSoftDemapper.create(algorithm, points, o, fixed);
                 SoftDemapper.create(reference, resolved, o);
             }
         } catch (IllegalArgumentException e) {

@@ -60,6 +60,7 @@ public final class VectorSetChecker {
         }
         VectorSpec spec = SpecReader.parse(manifest.spec().toString(), manifestFile + ": spec");
         groupCounts(manifest, problems);
+        countsFitTheFiles(spec, manifest, dir, manifestFile.toString());
         Path work = Files.createTempDirectory("fixmod-check-");
         Path temp = work.resolve("regenerated");
         try {
@@ -90,6 +91,30 @@ public final class VectorSetChecker {
         return problems;
     }
 
+    /**
+     * Refuses to regenerate a set the files cannot be: every vector takes at least one byte in every format, and the
+     * groups record the spec's count, so an edited {@code spec.count} (say 10^9 in a set of kilobytes) is reported
+     * at once instead of regenerated for hours.
+     */
+    private static void countsFitTheFiles(VectorSpec spec, Manifest manifest, Path dir, String where)
+            throws IOException {
+        long largest = 0;
+        for (Manifest.Entry e : manifest.files()) {
+            Path f = dir.resolve(e.name());
+            if (Files.isRegularFile(f)) {
+                largest = Math.max(largest, Files.size(f));
+            }
+        }
+        JsonNode groups = manifest.json().path("groups");
+        long mapperData = groups.path("mapper").path("data").asLong(spec.count());
+        long demapperData = groups.path("demapper").path("data-per-level").asLong(spec.count());
+        if (spec.count() > largest || mapperData != spec.count() || demapperData != spec.count()) {
+            throw new IllegalArgumentException(where + ": spec.count " + spec.count() + " does not fit the set (groups:"
+                    + " mapper data " + mapperData + ", demapper data-per-level " + demapperData + "; largest file "
+                    + largest + " bytes); the manifest was edited, so regenerating it cannot reproduce these files");
+        }
+    }
+
     private static void groupCounts(Manifest manifest, List<String> problems) {
         JsonNode groups = manifest.json().path("groups");
         for (Manifest.Entry e : manifest.files()) {
@@ -114,7 +139,8 @@ public final class VectorSetChecker {
         int fields = layout.path("fields").size();
         int digits = layout.path("hex-digits").asInt();
         String container = layout.path("storage").asText();
-        int bytes = container.endsWith("8_t") ? 1 : container.endsWith("16_t") ? 2 : 4;
+        String bitsOfType = container.replaceAll("[^0-9]", "");
+        int bytes = bitsOfType.isEmpty() ? 0 : Integer.parseInt(bitsOfType) / 8; // int16_t -> 2
         long size = Files.size(f);
         switch (e.format()) {
             case "binary" -> {

@@ -3,7 +3,10 @@ package dev.fixmod.verify.vectors;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Normalization;
+import dev.fixmod.fixed.Overflow;
+import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.demap.FixedLlrSpec;
 import dev.fixmod.demap.LlrScaling;
 import dev.fixmod.demap.LlrSign;
@@ -111,9 +114,18 @@ public record VectorSpec(String name, ConstellationChoice constellation, Quantiz
             Objects.requireNonNull(llrSign, "llrSign");
         }
 
-        /** The kernel's stage formats of the fixed LLR datapath. */
+        /** The kernel's stage formats of the fixed LLR datapath (its input format is the reference ROM's). */
         public FixedLlrSpec fixedSpec() {
             return new FixedLlrSpec(constantRounding, metric, scaling, scaleConstant, scale, llr);
+        }
+
+        /**
+         * The slicer's and LLR datapath's reference points: the constellation quantized onto the input grid with
+         * the constant rounding.
+         */
+        public ConstellationRom reference(Constellation constellation) {
+            return ConstellationRom.of(constellation, new Quantizer(input.format(), constantRounding,
+                    Overflow.SATURATE));
         }
     }
 

@@ -82,7 +82,7 @@ class DemapCommandTest {
         // Gray 16-QAM per axis on ±1, ±3, first bit beyond 2: L = −8(y − 1)/N0 (Tosato and Bisaglia 2002, from
         // memory; see MaxLogClosedFormTest): y = 2.5, N0 = 0.5 gives −24. Second bit: 4(|y| − 2)/N0 = 4.
         JsonNode root = json("demap", "-c", "qam16", "--normalization", "none", "--sample", "2.5,-0.25", "--n0",
-                "0.5", "--input-format", "Q3.4", "--output", "Q5.1,half-even,symmetric-saturate", "--json");
+                "0.5", "--input-format", "Q3.4", "--llr", "Q5.1,half-even,symmetric-saturate", "--json");
         JsonNode maxLog = root.get("float").get(1);
         assertEquals(-24.0, maxLog.get("llr").get(0).asDouble(), 1e-12);
         assertEquals(4.0, maxLog.get("llr").get(1).asDouble(), 1e-12);
@@ -133,7 +133,7 @@ class DemapCommandTest {
             {"demap", "-c", "qam16", "--sample", "0,0", "--codes", "0,0", "--n0", "1"},
             {"demap", "-c", "qam16", "--sample", "0,0"},
             {"demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--esn0", "3"},
-            {"demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--output", "Q4.1,round,saturate"},
+            {"demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--llr", "Q4.1,round,saturate"},
             {"demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--input-format", "Q2.x"},
             {"demap", "-c", "qam16", "--normalization", "none", "--sample", "0,0", "--n0", "1", "--input-format",
                 "Q0.6"},

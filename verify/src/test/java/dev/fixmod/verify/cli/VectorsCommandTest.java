@@ -76,11 +76,24 @@ class VectorsCommandTest {
         lines.set(3, lines.get(3).equals("00") ? "01" : "00");
         Files.write(hex, lines);
         Files.writeString(set.resolve("extra.txt"), "x");
+        Path csv = set.resolve("hard.csv");
+        List<String> rows = Files.readAllLines(csv);
+        Files.write(csv, rows.subList(0, rows.size() - 1));
         Run c = run("vectors", "check", set.toString());
         assertEquals(1, c.status(), c.out() + c.err());
         assertTrue(c.out().contains("llr.hex: SHA-256"), c.out());
         assertTrue(c.out().contains("llr.hex: regeneration differs from byte"), c.out());
         assertTrue(c.out().contains("extra.txt: present but not listed"), c.out());
+        assertTrue(c.out().contains("hard.csv: " + (rows.size() - 1) + " lines, but a header and " + (rows.size() - 1)
+                + " vectors need " + rows.size()), c.out());
+    }
+
+    @Test
+    void listWithoutAFolderShowsTheCommittedSuite() {
+        // run from the verify module: the nearest vectors/ folder is the project's
+        Run l = run("vectors", "list");
+        assertEquals(0, l.status(), l.err());
+        assertTrue(l.out().contains("nr-qam16") && l.out().contains("wlan:qam1024"), l.out());
     }
 
     @ParameterizedTest
