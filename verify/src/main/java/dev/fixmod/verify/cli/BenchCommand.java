@@ -28,7 +28,7 @@ import picocli.CommandLine.Spec;
                 + " bars, the machine, and the performance targets as ratios measured in the same run.",
                 "JMH's progress goes to standard error; the report to standard output."},
         footer = {"", "Examples:",
-                "  fixmod bench --quick                       all benchmarks, ~5 s each (about 8 minutes)",
+                "  fixmod bench --quick                       all benchmarks, ~5 s each (about 7 minutes)",
                 "  fixmod bench --quick --results bench.json 'Llr|Noise'",
                 "  fixmod bench --quick LlrBench --param demapper=fixed:max-log:256-qam,fixed:max-log-per-axis:256-qam",
                 "  fixmod bench --list",
@@ -51,8 +51,12 @@ public final class BenchCommand implements Callable<Integer> {
             + " and 5 × 2 s).")
     boolean quick;
 
-    @Option(names = "--results", paramLabel = "FILE", description = "Also write the results and targets to FILE as JSON.")
-    Path json;
+    @Option(names = "--json", description = "Print the results and targets as JSON instead of Markdown.")
+    boolean json;
+
+    @Option(names = "--results", paramLabel = "FILE", description = "Also write the results and targets as JSON to"
+            + " FILE (written whole or not at all).")
+    Path results;
 
     @Option(names = "--list", description = "List the benchmarks and their parameters, run nothing.")
     boolean list;
@@ -85,26 +89,26 @@ public final class BenchCommand implements Callable<Integer> {
             throw new UsageException("choose one of --list and --growth");
         }
         if (list) {
-            if (json != null) {
-                throw new UsageException("--list runs nothing, so it writes no --results");
+            if (json || results != null) {
+                throw new UsageException("--list runs nothing, so it takes no --json or --results");
             }
             BenchRunner.list(include).forEach(out::println);
             out.flush();
             return ExitStatus.OK;
         }
         if (cpuTime) {
-            if (list || growth || include != null || json != null || !params.isEmpty()) {
+            if (list || growth || include != null || results != null || !params.isEmpty()) {
                 throw new UsageException("--cpu-time takes no other option or PATTERN");
             }
             BenchReport report = new BenchReport(BenchReport.Machine.current().finished(),
                     "thread CPU time, best of 7 × 0.2 s after 1 s warm-up, no fork", CpuTime.measure());
-            out.print(report.markdown());
+            out.print(json ? report.json() : report.markdown());
             out.flush();
             return ExitStatus.OK;
         }
         if (growth) {
-            if (include != null || json != null) {
-                throw new UsageException("--growth takes no PATTERN or --results");
+            if (include != null || json || results != null) {
+                throw new UsageException("--growth takes no PATTERN, --json or --results");
             }
             if (growthMax < 10_000 || growthMax > 100_000_000 || !isPowerOfTen(growthMax)) {
                 throw new UsageException("--growth-max must be a power of ten from 10000 to 100000000, got "
@@ -114,18 +118,18 @@ public final class BenchCommand implements Callable<Integer> {
             out.flush();
             return ExitStatus.OK;
         }
-        if (json != null) {
-            Path parent = json.toAbsolutePath().getParent();
+        if (results != null) {
+            Path parent = results.toAbsolutePath().getParent();
             if (parent != null && !Files.isDirectory(parent)) {
-                throw new UsageException("--results " + json + ": the folder " + parent + " does not exist");
+                throw new UsageException("--results " + results + ": the folder " + parent + " does not exist");
             }
         }
         BenchReport report = BenchRunner.run(include, params, quick ? BenchRunner.Settings.QUICK
                 : BenchRunner.Settings.FULL, System.err, !quiet);
-        if (json != null) {
-            writeAtomically(json, report.json());
+        if (results != null) {
+            writeAtomically(results, report.json());
         }
-        out.print(report.markdown());
+        out.print(json ? report.json() : report.markdown());
         out.flush();
         return ExitStatus.OK;
     }

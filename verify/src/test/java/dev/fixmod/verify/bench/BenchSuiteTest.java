@@ -38,7 +38,8 @@ class BenchSuiteTest {
     void helpAndListWork() {
         Run help = run("bench", "--help");
         assertEquals(0, help.status);
-        assertTrue(help.out.contains("--quick") && help.out.contains("--results"), help.out);
+        assertTrue(help.out.contains("--quick") && help.out.contains("--results") && help.out.contains("--json"),
+                help.out);
         Run list = run("bench", "--list", "Noise");
         assertEquals(0, list.status);
         assertEquals("NoiseBench.gaussian  method=box-muller,ziggurat", list.out.strip());
@@ -52,6 +53,12 @@ class BenchSuiteTest {
         Run growth = run("bench", "--growth", "--growth-max", "12345");
         assertEquals(2, growth.status);
         assertTrue(growth.err.contains("power of ten"), growth.err);
+        Run listJson = run("bench", "--list", "--json");
+        assertEquals(2, listJson.status);
+        assertTrue(listJson.err.contains("--list runs nothing"), listJson.err);
+        Run growthJson = run("bench", "--growth", "--json");
+        assertEquals(2, growthJson.status);
+        assertTrue(growthJson.err.contains("--growth takes no"), growthJson.err);
     }
 
     @Test
