@@ -108,7 +108,7 @@ public final class Simulation {
         }
     }
 
-    /** Everything a chunk needs; immutable, shared by the workers (each builds its own demappers). */
+    /** Everything a chunk needs; immutable, shared by the workers (each chunk builds its own demappers and noise). */
     private final class Point {
         final Design design;
         final ConstellationRom tx;
