@@ -2,6 +2,7 @@
 -- reference points (index = label, demapper input codes).
 -- ROM words: Q1.10 (signed, 12-bit word, 10 fractional bits, range [-2, 1.9990234375], LSB 2^-10)
 -- Thresholds and reference points: Q2.9 (signed, 12-bit word, 9 fractional bits, range [-4, 3.998046875], LSB 2^-9)
+-- LLR scale constant K per level: UQ8.8 (unsigned, 16-bit word, 8 fractional bits, range [0, 255.99609375], LSB 2^-8); index 0 = design level (no noise), l + 1 = noise level l.
 library ieee;
 use ieee.numeric_std.all;
 
@@ -9,9 +10,11 @@ package nr_qam256_tables_pkg is
   constant ROM_WIDTH : natural := 12;
   constant THRESHOLD_WIDTH : natural := 12;
   constant REFERENCE_WIDTH : natural := 12;
+  constant LLR_SCALE_WIDTH : natural := 16;
   type rom_t is array (natural range <>) of signed(ROM_WIDTH - 1 downto 0);
   type threshold_t is array (natural range <>) of signed(THRESHOLD_WIDTH - 1 downto 0);
   type reference_t is array (natural range <>) of signed(REFERENCE_WIDTH - 1 downto 0);
+  type llr_scale_t is array (natural range <>) of unsigned(LLR_SCALE_WIDTH - 1 downto 0);
   constant MAPPER_ROM_I : rom_t(0 to 255) := (
     0 => to_signed(393, ROM_WIDTH),
     1 => to_signed(393, ROM_WIDTH),
@@ -1072,4 +1075,7 @@ package nr_qam256_tables_pkg is
     253 => to_signed(-589, REFERENCE_WIDTH),
     254 => to_signed(-510, REFERENCE_WIDTH),
     255 => to_signed(-589, REFERENCE_WIDTH));
+  constant LLR_SCALE : llr_scale_t(0 to 1) := (
+    0 => to_unsigned(64304, LLR_SCALE_WIDTH),
+    1 => to_unsigned(64304, LLR_SCALE_WIDTH));
 end package nr_qam256_tables_pkg;

@@ -7,6 +7,7 @@
 --   rays at phi0 + (2j+1)*180/M degrees and opposite (phi0 = angle of label 0);
 --   A*I + B*Q >= 0 means on the line or on its larger-I side. The decision is the
 --   reference point whose M/2 results equal the sample's.
+-- LLR scale constant K per level: UQ5.11 (unsigned, 16-bit word, 11 fractional bits, range [0, 31.99951171875], LSB 2^-11); index 0 = design level (no noise), l + 1 = noise level l.
 library ieee;
 use ieee.numeric_std.all;
 
@@ -15,10 +16,12 @@ package psk8_tables_pkg is
   constant THRESHOLD_WIDTH : natural := 10;
   constant REFERENCE_WIDTH : natural := 10;
   constant SECTOR_LINE_WIDTH : natural := 16;
+  constant LLR_SCALE_WIDTH : natural := 16;
   type rom_t is array (natural range <>) of signed(ROM_WIDTH - 1 downto 0);
   type threshold_t is array (natural range <>) of signed(THRESHOLD_WIDTH - 1 downto 0);
   type reference_t is array (natural range <>) of signed(REFERENCE_WIDTH - 1 downto 0);
   type sector_line_t is array (natural range <>) of signed(SECTOR_LINE_WIDTH - 1 downto 0);
+  type llr_scale_t is array (natural range <>) of unsigned(LLR_SCALE_WIDTH - 1 downto 0);
   constant MAPPER_ROM_I : rom_t(0 to 7) := (
     0 => to_signed(256, ROM_WIDTH),
     1 => to_signed(181, ROM_WIDTH),
@@ -67,4 +70,8 @@ package psk8_tables_pkg is
     1 => to_signed(-6786, SECTOR_LINE_WIDTH),
     2 => to_signed(6786, SECTOR_LINE_WIDTH),
     3 => to_signed(16384, SECTOR_LINE_WIDTH));
+  constant LLR_SCALE : llr_scale_t(0 to 2) := (
+    0 => to_unsigned(51443, LLR_SCALE_WIDTH),
+    1 => to_unsigned(12922, LLR_SCALE_WIDTH),
+    2 => to_unsigned(51443, LLR_SCALE_WIDTH));
 end package psk8_tables_pkg;

@@ -2,6 +2,7 @@
 -- reference points (index = label, demapper input codes).
 -- ROM words: Q1.14 (signed, 16-bit word, 14 fractional bits, range [-2, 1.99993896484375], LSB 2^-14)
 -- Thresholds and reference points: Q2.11 (signed, 14-bit word, 11 fractional bits, range [-4, 3.99951171875], LSB 2^-11)
+-- LLR scale constant K per level: UQ11.5 (unsigned, 16-bit word, 5 fractional bits, range [0, 2047.96875], LSB 2^-5); index 0 = design level (no noise), l + 1 = noise level l.
 library ieee;
 use ieee.numeric_std.all;
 
@@ -9,9 +10,11 @@ package wlan_qam1024_tables_pkg is
   constant ROM_WIDTH : natural := 16;
   constant THRESHOLD_WIDTH : natural := 14;
   constant REFERENCE_WIDTH : natural := 14;
+  constant LLR_SCALE_WIDTH : natural := 16;
   type rom_t is array (natural range <>) of signed(ROM_WIDTH - 1 downto 0);
   type threshold_t is array (natural range <>) of signed(THRESHOLD_WIDTH - 1 downto 0);
   type reference_t is array (natural range <>) of signed(REFERENCE_WIDTH - 1 downto 0);
+  type llr_scale_t is array (natural range <>) of unsigned(LLR_SCALE_WIDTH - 1 downto 0);
   constant MAPPER_ROM_I : rom_t(0 to 1023) := (
     0 => to_signed(-19449, ROM_WIDTH),
     1 => to_signed(-19449, ROM_WIDTH),
@@ -4176,4 +4179,7 @@ package wlan_qam1024_tables_pkg is
     1021 => to_signed(1019, REFERENCE_WIDTH),
     1022 => to_signed(706, REFERENCE_WIDTH),
     1023 => to_signed(863, REFERENCE_WIDTH));
+  constant LLR_SCALE : llr_scale_t(0 to 1) := (
+    0 => to_unsigned(32000, LLR_SCALE_WIDTH),
+    1 => to_unsigned(42264, LLR_SCALE_WIDTH));
 end package wlan_qam1024_tables_pkg;

@@ -75,6 +75,15 @@ interface Datapath {
     /** The format of the sector lines' codes; empty if the slicer has no sector lines. */
     Optional<QFormat> sectorLineFormat();
 
+    /**
+     * The codes of the LLR scale constant K per level, in {@link #scaleFormat()}: slot 0 for the design level
+     * (vectors without noise), slot l + 1 for noise level l. Empty when the datapath is unscaled.
+     */
+    long[] scaleCodes();
+
+    /** The format of K; empty when the datapath is unscaled. */
+    Optional<QFormat> scaleFormat();
+
     /** The lowest code the LLR stage emits (the most negative code, or minus the largest for symmetric-saturate). */
     long llrLow();
 

@@ -38,6 +38,7 @@ final class KernelDatapath implements Datapath {
     private final long[] thresholdsQ;
     private final long[][] sectorLines;
     private final QFormat sectorLineFormat;
+    private final QFormat scaleFormat;
     private final long llrLow;
     private final long llrHigh;
 
@@ -79,6 +80,8 @@ final class KernelDatapath implements Datapath {
             unitsPerNat[s] = spec.demapper().scaling() == LlrScaling.NOISE_SCALED ? 1.0
                     : 1.0 / probe[s].idealScaleConstant();
         }
+        scaleFormat = spec.demapper().scaling() == LlrScaling.NOISE_SCALED
+                ? spec.demapper().fixedSpec().scaleConstant() : null;
         if (slicer instanceof FixedAxisSlicer axis) {
             thresholdsI = widen(axis.iThresholds());
             thresholdsQ = widen(axis.qThresholds());
@@ -245,6 +248,24 @@ final class KernelDatapath implements Datapath {
             copy[j] = sectorLines[j].clone();
         }
         return copy;
+    }
+
+    @Override
+    public long[] scaleCodes() {
+        if (scaleFormat == null) {
+            return new long[0];
+        }
+        FixedSoftDemapper[] d = fixed.get();
+        long[] codes = new long[d.length];
+        for (int s = 0; s < d.length; s++) {
+            codes[s] = d[s].scaleConstantCode();
+        }
+        return codes;
+    }
+
+    @Override
+    public Optional<QFormat> scaleFormat() {
+        return Optional.ofNullable(scaleFormat);
     }
 
     @Override

@@ -105,6 +105,37 @@ class SlicerTablesTest {
         assertEquals(set.equals("psk8"), sector, "only the PSK set has sector lines");
     }
 
+    /**
+     * K = 1/N0 with N0 = E_s / 10^(E_s/N0 / 10) per level (the definition of E_s/N0 with N0 the complex noise power;
+     * common practice, no source), rounded half-even to the fractional bits of the file's field by BigDecimal (the JDK
+     * as the rounding oracle); row 0 is the design level, row l + 1 noise level l.
+     */
+    @ParameterizedTest
+    @MethodSource("sets")
+    void theScaleTableHoldsKPerLevelWhenNoiseScaled(String set) throws IOException {
+        VectorSpec spec = spec(set);
+        KernelDatapath d = KernelDatapath.of(spec);
+        boolean scaled = spec.demapper().scaling() == dev.fixmod.demap.LlrScaling.NOISE_SCALED;
+        boolean listed = manifest(set).files().stream().anyMatch(e -> e.name().equals("llr-scale.hex"));
+        assertEquals(scaled, listed, set + ": llr-scale.hex exactly when noise-scaled");
+        if (!scaled) {
+            return;
+        }
+        Table k = hex(set, "llr-scale.hex");
+        int levels = spec.noise().levelsDb().size();
+        assertEquals(levels + 1, k.size(), "the design level, then each noise level");
+        JsonNode field = k.layout().path("fields").get(0);
+        assertEquals(false, field.path("signed").asBoolean(), "K is unsigned");
+        int frac = dev.fixmod.fixed.QFormat.parse(field.path("format").asText()).fractionalBits();
+        for (int row = 0; row <= levels; row++) {
+            double db = row == 0 ? spec.demapper().designEsN0Db() : spec.noise().esN0Db(row - 1, d.bitsPerSymbol());
+            double n0 = d.averageEnergy() / StrictMath.pow(10.0, db / 10.0);
+            long expected = new BigDecimal(1.0 / n0).multiply(BigDecimal.valueOf(2).pow(frac))
+                    .setScale(0, RoundingMode.HALF_EVEN).longValueExact();
+            assertEquals(expected, k.get(row, 0), set + " row " + row + " (" + db + " dB)");
+        }
+    }
+
     @Test
     void eightPskLinesAndReferencePointsAloneGiveEveryCommittedHardDecision() throws IOException {
         Table lines = hex("psk8", "slicer-lines.hex");
