@@ -152,6 +152,12 @@ public final class LossCommand implements Callable<Integer> {
         for (LossAnalysis.Sizing s : analysis.sizing()) {
             out.println("  " + s.parameter() + ": choose " + s.chosen() + " (" + s.reason() + ")");
         }
+        for (LossAnalysis.GridSizing g : analysis.grids()) {
+            out.println("  grid " + g.parameters().get(0) + " x " + g.parameters().get(1) + ": choose "
+                    + (g.chosen() < 0 ? dev.fixmod.verify.loss.Numbers.NONE
+                    : LossSpecReader.combination(g.parameters(), g.rows().get(g.chosen()).values()))
+                    + " (" + g.reason() + ")");
+        }
         out.flush();
         return ExitStatus.OK;
     }
@@ -184,6 +190,7 @@ public final class LossCommand implements Callable<Integer> {
                 read.add(PartialResult.read(Files.readString(p), p.toString()));
             }
             PartialResult first = read.get(0);
+            LossRun run = new LossRun(LossSpecReader.parse(first.specText(), first.specSource()));
             boolean[] seen = new boolean[Math.max(first.shards(), 1) + 1];
             List<PointResult> points = new ArrayList<>();
             for (int i = 0; i < read.size(); i++) {
@@ -197,6 +204,13 @@ public final class LossCommand implements Callable<Integer> {
                             + " is given twice or is out of range");
                 }
                 seen[r.shard()] = true;
+                for (PointResult p : r.points()) {
+                    try {
+                        run.check(p);
+                    } catch (IllegalArgumentException e) {
+                        throw new UsageException(parts.get(i) + ": " + e.getMessage());
+                    }
+                }
                 points.addAll(r.points());
             }
             for (int s = 1; s <= first.shards(); s++) {
@@ -205,7 +219,6 @@ public final class LossCommand implements Callable<Integer> {
                             + first.shards() + " partial results");
                 }
             }
-            LossRun run = new LossRun(LossSpecReader.parse(first.specText(), first.specSource()));
             return report(run, points, output, force, spec.commandLine().getOut());
         }
     }

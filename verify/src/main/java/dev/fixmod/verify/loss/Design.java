@@ -24,13 +24,22 @@ import java.util.Objects;
  * input format, and its noise power is N0·g² (in input units) divided by the LLR scale s, so the output code c stands
  * for the LLR c·LSB/s nats (noise-scaled) — s spreads the LLRs over more codes.
  *
+ * <p>The internal stages of the datapath ({@code metric}, {@code scaleConstant}, {@code scale}) are either given or
+ * {@code null}: a {@code null} stage is the kernel's suggestion ({@link FixedLlrSpec#suggested}) for this design,
+ * sized for the smallest N0 of the run, with this design's rounding. An unscaled datapath has neither scale constant
+ * nor scale stage (both {@code null}).
+ *
  * @param backOffDb            the input back-off in dB, or NaN for gain 1
+ * @param metric               the metric stage, or {@code null} for the suggested one
+ * @param scaleConstant        the format of K, or {@code null} for the suggested one (or none: unscaled)
+ * @param scale                the product stage metric × K, or {@code null} for the suggested one (or none: unscaled)
  * @param llrScale             s &gt; 0, the factor applied to the LLR before the output quantizer
- * @param rounding             the rounding of every receive stage (input, metric, scale, output, constants)
+ * @param rounding             the rounding of the constants (receive ROM, K, fold constants) and of every suggested
+ *                             stage; a given stage keeps its own ({@link #withRounding} sets them all)
  */
 public record Design(Constellation constellation, Quantizer mapper, Quantizer input, double backOffDb,
-                     SoftAlgorithm algorithm, SoftAlgorithm reference, LlrScaling scaling, Quantizer llr,
-                     double llrScale, Rounding rounding) {
+                     SoftAlgorithm algorithm, SoftAlgorithm reference, LlrScaling scaling, Quantizer metric,
+                     QFormat scaleConstant, Quantizer scale, Quantizer llr, double llrScale, Rounding rounding) {
 
     /** The widest LLR word: the fixed GMI keeps a histogram over every code. */
     public static final int MAX_LLR_WORD_LENGTH = 12;
@@ -58,6 +67,10 @@ public record Design(Constellation constellation, Quantizer mapper, Quantizer in
             throw new IllegalArgumentException("log-map has no fixed-point datapath; expected max-log, max-log-per-axis"
                     + " or folded-linear (log-map may be the float reference)");
         }
+        if (scaling == LlrScaling.UNSCALED && (scaleConstant != null || scale != null)) {
+            throw new IllegalArgumentException("an unscaled datapath has no scale constant or scale stage; use"
+                    + " noise-scaled");
+        }
     }
 
     /** The receiver gain g applied before the input quantizer. */
@@ -77,14 +90,14 @@ public record Design(Constellation constellation, Quantizer mapper, Quantizer in
         return ConstellationRom.of(constellation, mapper);
     }
 
-    /** The datapath's reference points: the constellation times the gain in the input format. */
+    /** The datapath's reference points: the constellation times the gain in the input format, rounded as constants. */
     public ConstellationRom receiveRom() {
-        return new ConstellationRom(constellation, gain(), inputQuantizer());
+        return new ConstellationRom(constellation, gain(), new Quantizer(input.format(), rounding, input.overflow()));
     }
 
-    /** The input stage with this design's rounding. */
+    /** The input stage: what the received samples go through. */
     public Quantizer inputQuantizer() {
-        return new Quantizer(input.format(), rounding, input.overflow());
+        return input;
     }
 
     /** The options of the fixed datapath for complex noise power {@code n0} at the channel (before the gain). */
@@ -94,18 +107,23 @@ public record Design(Constellation constellation, Quantizer mapper, Quantizer in
     }
 
     /**
-     * The stage formats: {@link FixedLlrSpec#suggested} sized for the largest scale constant (the smallest N0 of the
-     * run), with this design's rounding in every stage and its output quantizer.
+     * The stage formats: the given stages, and for the others {@link FixedLlrSpec#suggested} sized for the largest
+     * scale constant (the smallest N0 of the run) with this design's rounding; the output is the LLR stage.
      */
     public FixedLlrSpec llrSpec(ConstellationRom rx, double smallestN0) {
-        FixedLlrSpec s = FixedLlrSpec.suggested(algorithm, rx, fixedOptions(smallestN0), llr.format());
-        Quantizer metric = new Quantizer(s.metric().format(), rounding, s.metric().overflow());
-        Quantizer out = new Quantizer(llr.format(), rounding, llr.overflow());
+        FixedLlrSpec s = suggestedLlrSpec(rx, smallestN0);
+        Quantizer m = metric != null ? metric : new Quantizer(s.metric().format(), rounding, s.metric().overflow());
         if (scaling == LlrScaling.UNSCALED) {
-            return FixedLlrSpec.unscaled(rounding, metric, out);
+            return FixedLlrSpec.unscaled(rounding, m, llr);
         }
-        return new FixedLlrSpec(rounding, metric, LlrScaling.NOISE_SCALED, s.scaleConstant(),
-                new Quantizer(s.scale().format(), rounding, s.scale().overflow()), out);
+        return new FixedLlrSpec(rounding, m, LlrScaling.NOISE_SCALED,
+                scaleConstant != null ? scaleConstant : s.scaleConstant(),
+                scale != null ? scale : new Quantizer(s.scale().format(), rounding, s.scale().overflow()), llr);
+    }
+
+    /** The kernel's suggestion for this design: its range analysis (a metric stage that cannot overflow). */
+    public FixedLlrSpec suggestedLlrSpec(ConstellationRom rx, double smallestN0) {
+        return FixedLlrSpec.suggested(algorithm, rx, fixedOptions(smallestN0), llr.format());
     }
 
     /** The fixed datapath at channel noise power {@code n0}. */
@@ -125,34 +143,63 @@ public record Design(Constellation constellation, Quantizer mapper, Quantizer in
         return datapath.spec().isScaled() ? perCode : perCode * datapath.idealScaleConstant();
     }
 
-    /** A one-line description for tables. */
+    /** A one-line description for tables; internal stages appear only where given (else they are suggested). */
     public String describe() {
         return "in " + input.format() + (Double.isNaN(backOffDb) ? "" : " back-off " + Numbers.fixed(backOffDb, 2)
-                + " dB") + ", " + algorithm + ", LLR " + llr.format() + " scale " + Numbers.plain(llrScale) + ", "
-                + rounding;
+                + " dB") + ", " + algorithm + (metric == null ? "" : ", metric " + metric.format())
+                + (scaleConstant == null ? "" : ", scale constant " + scaleConstant)
+                + (scale == null ? "" : ", scale " + scale.format()) + ", LLR " + llr.format() + " scale "
+                + Numbers.plain(llrScale) + ", " + rounding;
     }
 
     public Design withInput(Quantizer q) {
-        return new Design(constellation, mapper, q, backOffDb, algorithm, reference, scaling, llr, llrScale, rounding);
+        return new Design(constellation, mapper, q, backOffDb, algorithm, reference, scaling, metric, scaleConstant,
+                scale, llr, llrScale, rounding);
     }
 
     public Design withBackOffDb(double b) {
-        return new Design(constellation, mapper, input, b, algorithm, reference, scaling, llr, llrScale, rounding);
+        return new Design(constellation, mapper, input, b, algorithm, reference, scaling, metric, scaleConstant,
+                scale, llr, llrScale, rounding);
     }
 
     public Design withAlgorithm(SoftAlgorithm a) {
-        return new Design(constellation, mapper, input, backOffDb, a, reference, scaling, llr, llrScale, rounding);
+        return new Design(constellation, mapper, input, backOffDb, a, reference, scaling, metric, scaleConstant,
+                scale, llr, llrScale, rounding);
+    }
+
+    public Design withMetric(Quantizer q) {
+        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, q, scaleConstant,
+                scale, llr, llrScale, rounding);
+    }
+
+    public Design withScaleConstant(QFormat f) {
+        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, metric, f, scale,
+                llr, llrScale, rounding);
+    }
+
+    public Design withScale(Quantizer q) {
+        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, metric,
+                scaleConstant, q, llr, llrScale, rounding);
     }
 
     public Design withLlr(Quantizer q) {
-        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, q, llrScale, rounding);
+        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, metric,
+                scaleConstant, scale, q, llrScale, rounding);
     }
 
     public Design withLlrScale(double s) {
-        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, llr, s, rounding);
+        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, metric,
+                scaleConstant, scale, llr, s, rounding);
     }
 
+    /** Every receive stage (input, given internal stages, output) and the constants rounded with {@code r}. */
     public Design withRounding(Rounding r) {
-        return new Design(constellation, mapper, input, backOffDb, algorithm, reference, scaling, llr, llrScale, r);
+        return new Design(constellation, mapper, rounded(input, r), backOffDb, algorithm, reference, scaling,
+                metric == null ? null : rounded(metric, r), scaleConstant, scale == null ? null : rounded(scale, r),
+                rounded(llr, r), llrScale, r);
+    }
+
+    private static Quantizer rounded(Quantizer q, Rounding r) {
+        return new Quantizer(q.format(), r, q.overflow());
     }
 }

@@ -20,8 +20,9 @@ import java.util.OptionalDouble;
 /**
  * The figures derived from a run's points: per design the BER, SER and GMI curves of float and fixed with 99%
  * Clopper–Pearson intervals, the implementation losses at the target BER and the target GMI, the saturation rates
- * per stage, the static figures of the ROMs and the input quantizer, the range analysis; per sweep the sizing
- * table. Pure function of the specification and the points.
+ * and overflow events per stage, the static figures of the ROMs and the input quantizer, the range analysis; per
+ * sweep the sizing table, per grid the loss table and the cheapest combination within the budget. Pure function of
+ * the specification and the points.
  */
 public final class LossAnalysis {
     public static final double CONFIDENCE = 0.99;
@@ -31,9 +32,27 @@ public final class LossAnalysis {
                              double evmDb, double powerEfficiencyLossDb) {
     }
 
-    /** The receive chain's range figures: what cannot overflow and what the chosen formats do. */
+    /**
+     * The receive chain's range figures: the chosen stage formats, what the kernel's range analysis says the metric
+     * needs ({@link FixedLlrSpec#suggested}: integer bits with which no input code can overflow it), the largest LLR.
+     *
+     * @param stages the datapath's stages as simulated
+     */
     public record Range(String metricFormat, String scaleConstantFormat, String scaleFormat, double maxLlrNats,
-                        int llrIntegerBitsNoSaturation, double llrSaturatesAboveNats) {
+                        int llrIntegerBitsNoSaturation, double llrSaturatesAboveNats, FixedLlrSpec stages,
+                        int metricIntegerBitsNoOverflow) {
+
+        /** Whether the metric stage has the integer bits the kernel's range analysis asks for. */
+        public boolean metricCannotOverflow() {
+            return stages.metric().format().integerBits() >= metricIntegerBitsNoOverflow;
+        }
+    }
+
+    /**
+     * A design's overflow events summed over its points, per stage (the kernel's counters): input clips per real
+     * sample, the LLR stages per LLR.
+     */
+    public record Overflows(long inputSamples, long inputClips, long llrs, long metric, long scale, long output) {
     }
 
     /** The input quantizer at the operating point. */
@@ -52,7 +71,7 @@ public final class LossAnalysis {
     public record DesignFigures(int index, Design design, List<Point> points, double lossBerDb, double lossGmiDb,
                                 double floatEbN0AtBer, double fixedEbN0AtBer, double floatEbN0AtGmi,
                                 double fixedEbN0AtGmi, RomFigures transmitRom, RomFigures receiveRom,
-                                InputFigures input, Range range, double maxOutputSaturation) {
+                                InputFigures input, Range range, double maxOutputSaturation, Overflows overflows) {
 
         /** The loss the sizing uses. */
         public double loss(String measure) {
@@ -68,9 +87,24 @@ public final class LossAnalysis {
     public record Sizing(String parameter, List<SizingRow> rows, String chosen, String reason) {
     }
 
+    /** One combination of a grid: its values, its design, its cost in bits and its losses. */
+    public record GridRow(List<String> values, int design, int bits, double lossBerDb, double lossGmiDb,
+                          boolean withinBudget) {
+    }
+
+    /**
+     * One grid's sizing: every combination (first parameter's value major) and the cheapest one within the budget:
+     * the fewest bits (the sum of the word lengths the two parameters set), then the least loss, then the first
+     * listed; {@code chosen} is its index in {@code rows}, or −1 when none is within the budget.
+     */
+    public record GridSizing(List<String> parameters, List<List<String>> values, List<GridRow> rows, int chosen,
+                             String reason) {
+    }
+
     private final LossRun run;
     private final List<DesignFigures> designs;
     private final List<Sizing> sizing;
+    private final List<GridSizing> grids;
 
     public LossAnalysis(LossRun run, List<PointResult> points) {
         this.run = run;
@@ -86,6 +120,11 @@ public final class LossAnalysis {
             s.add(size(sweep));
         }
         this.sizing = List.copyOf(s);
+        List<GridSizing> g = new ArrayList<>();
+        for (LossSpec.Grid grid : spec.grids()) {
+            g.add(size(grid));
+        }
+        this.grids = List.copyOf(g);
     }
 
     public LossRun run() {
@@ -98,6 +137,10 @@ public final class LossAnalysis {
 
     public List<Sizing> sizing() {
         return sizing;
+    }
+
+    public List<GridSizing> grids() {
+        return grids;
     }
 
     private DesignFigures figures(int index, Design d, List<PointResult> results) {
@@ -115,8 +158,15 @@ public final class LossAnalysis {
         double gain = d.gain();
         double signal = gain * gain * c.averageEnergy();
         double maxOut = 0;
+        long[] events = new long[6];
         for (int i = 0; i < n; i++) {
             PointResult r = results.get(i);
+            events[0] += r.inputSamples();
+            events[1] += r.inputClips();
+            events[2] += r.bits();
+            events[3] += r.metricEvents();
+            events[4] += r.scaleEvents();
+            events[5] += r.outputEvents();
             eb[i] = spec.ebN0Db().get(i);
             double n0 = Simulation.n0(c, eb[i], spec.codeRate());
             FixedSoftDemapper datapath = d.fixedDemapper(rx, llrSpec, n0);
@@ -148,7 +198,8 @@ public final class LossAnalysis {
         double xg = orNaN(SnrAtTarget.rate(eb, gmiFixed, spec.targets().gmi()));
         ConstellationRom tx = d.transmitRom();
         return new DesignFigures(index, d, points, xb - fb, xg - fg, fb, xb, fg, xg,
-                rom(c, tx, 1.0), rom(c, rx, gain), input(d, points), range(d, rx, llrSpec), maxOut);
+                rom(c, tx, 1.0), rom(c, rx, gain), input(d, points), range(d, rx, llrSpec), maxOut,
+                new Overflows(events[0], events[1], events[2], events[3], events[4], events[5]));
     }
 
     private static double orNaN(OptionalDouble v) {
@@ -253,10 +304,12 @@ public final class LossAnalysis {
             bits++;
         }
         QFormat out = d.llr().format();
-        return new Range(llrSpec.metric().format().describe(),
+        QFormat metric = llrSpec.metric().format();
+        return new Range(metric.describe(),
                 llrSpec.isScaled() ? llrSpec.scaleConstant().describe() : "none (unscaled)",
                 llrSpec.isScaled() ? llrSpec.scale().format().describe() : "none (unscaled)", max, bits,
-                out.maxValue() / d.llrScale());
+                out.maxValue() / d.llrScale(), llrSpec,
+                d.suggestedLlrSpec(rx, n0).metric().format().integerBits());
     }
 
     private Sizing size(LossSpec.Sweep sweep) {
@@ -300,5 +353,48 @@ public final class LossAnalysis {
                     : "the value with the smallest loss at " + measure;
         }
         return new Sizing(sweep.parameter(), rows, chosen == null ? Numbers.NONE : chosen, reason);
+    }
+
+    private GridSizing size(LossSpec.Grid grid) {
+        LossSpec spec = run.spec();
+        LossSpec.Targets t = spec.targets();
+        SweepParameter first = SweepParameter.fromName(grid.parameters().get(0));
+        SweepParameter second = SweepParameter.fromName(grid.parameters().get(1));
+        double n0 = spec.smallestN0();
+        List<GridRow> rows = new ArrayList<>();
+        int chosen = -1;
+        for (int i = 0; i < grid.designs().size(); i++) {
+            Design d = grid.designs().get(i);
+            int index = run.designs().indexOf(d);
+            DesignFigures f = designs.get(index);
+            double loss = f.loss(t.sizingMeasure());
+            GridRow row = new GridRow(grid.combination(i), index, first.bits(d, n0) + second.bits(d, n0),
+                    f.lossBerDb(), f.lossGmiDb(), Double.isFinite(loss) && loss <= t.budgetDb());
+            rows.add(row);
+            if (row.withinBudget() && (chosen < 0 || cheaper(row, rows.get(chosen), t.sizingMeasure()))) {
+                chosen = i;
+            }
+        }
+        String measure = t.sizingMeasure().equals("ber") ? "BER " + Numbers.sci(t.ber(), 2)
+                : "GMI " + Numbers.plain(t.gmi()) + " bit/symbol";
+        String reason = chosen < 0 ? "no combination tried stays within the budget of "
+                + Numbers.fixed(t.budgetDb(), 2) + " dB at " + measure + "; try wider formats"
+                : first.isWordLength() || second.isWordLength()
+                ? "the combination with the fewest bits (" + rows.get(chosen).bits() + ": the word lengths "
+                + first.tradeName() + " and " + second.tradeName() + " set, summed) whose loss at " + measure
+                + " stays within " + Numbers.fixed(t.budgetDb(), 2) + " dB; ties go to the least loss"
+                : "the combination with the least loss at " + measure + " (within the budget of "
+                + Numbers.fixed(t.budgetDb(), 2) + " dB)";
+        return new GridSizing(grid.parameters(), grid.values(), rows, chosen, reason);
+    }
+
+    /** Fewer bits; at equal bits, less loss (an earlier row wins a full tie, as it is kept). */
+    private static boolean cheaper(GridRow a, GridRow b, String measure) {
+        if (a.bits() != b.bits()) {
+            return a.bits() < b.bits();
+        }
+        double la = measure.equals("ber") ? a.lossBerDb() : a.lossGmiDb();
+        double lb = measure.equals("ber") ? b.lossBerDb() : b.lossGmiDb();
+        return la < lb;
     }
 }

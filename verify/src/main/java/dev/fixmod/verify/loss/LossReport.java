@@ -3,6 +3,8 @@ package dev.fixmod.verify.loss;
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import dev.fixmod.demap.FixedLlrSpec;
+import dev.fixmod.demap.FixedSoftDemapper;
 import dev.fixmod.verify.formats.OutputSet;
 import dev.fixmod.verify.theory.ErrorRateInterval;
 import java.io.IOException;
@@ -11,11 +13,13 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 
 /**
- * Writes a loss analysis as {@code results.json}, {@code results.csv}, {@code report.md} and a self-contained
- * {@code report.html} (inline SVG charts, no external resource) into a folder that appears only when complete.
- * Every number is formatted by {@link Numbers}.
+ * Writes a loss analysis as {@code results.json}, {@code results.csv} (one row per point), {@code sizing.csv} (one
+ * row per sweep value and grid combination), {@code report.md} and a self-contained {@code report.html} (inline SVG
+ * charts, no external resource) into a folder that appears only when complete. Every number is formatted by
+ * {@link Numbers}.
  */
 public final class LossReport {
     public static final String CAUTION = "Engineering model, not conformance certification: the figures come from a"
@@ -29,7 +33,7 @@ public final class LossReport {
         this.spec = analysis.run().spec();
     }
 
-    /** Writes the four files to {@code target} atomically. */
+    /** Writes the five files to {@code target} atomically. */
     public void write(Path target, boolean force) throws IOException {
         System.setProperty("java.awt.headless", "true");
         try (OutputSet set = OutputSet.create(target, force)) {
@@ -38,6 +42,9 @@ public final class LossReport {
             }
             try (Writer w = writer(set.newFile("results.csv"))) {
                 w.write(csv());
+            }
+            try (Writer w = writer(set.newFile("sizing.csv"))) {
+                w.write(sizingCsv());
             }
             try (Writer w = writer(set.newFile("report.md"))) {
                 w.write(markdown());
@@ -101,6 +108,17 @@ public final class LossReport {
                 num(g, "max-llr-nats", Numbers.fixed(f.range().maxLlrNats(), 3));
                 g.writeNumberField("llr-integer-bits-no-saturation", f.range().llrIntegerBitsNoSaturation());
                 num(g, "llr-saturates-above-nats", Numbers.plain(f.range().llrSaturatesAboveNats()));
+                g.writeNumberField("metric-integer-bits", f.range().stages().metric().format().integerBits());
+                g.writeNumberField("metric-integer-bits-no-overflow", f.range().metricIntegerBitsNoOverflow());
+                g.writeEndObject();
+                LossAnalysis.Overflows o = f.overflows();
+                g.writeObjectFieldStart("overflow-events");
+                g.writeNumberField("input-samples", o.inputSamples());
+                g.writeNumberField("input-clips", o.inputClips());
+                g.writeNumberField("llrs", o.llrs());
+                g.writeNumberField(FixedSoftDemapper.METRIC_STAGE, o.metric());
+                g.writeNumberField(FixedSoftDemapper.SCALE_STAGE, o.scale());
+                g.writeNumberField(FixedSoftDemapper.OUTPUT_STAGE, o.output());
                 g.writeEndObject();
                 g.writeArrayFieldStart("points");
                 for (LossAnalysis.Point p : f.points()) {
@@ -136,6 +154,44 @@ public final class LossReport {
                     g.writeStartObject();
                     g.writeStringField("value", r.value());
                     g.writeNumberField("design", r.design());
+                    num(g, "loss-at-ber-db", Numbers.fixed(r.lossBerDb(), 4));
+                    num(g, "loss-at-gmi-db", Numbers.fixed(r.lossGmiDb(), 4));
+                    g.writeBooleanField("within-budget", r.withinBudget());
+                    g.writeEndObject();
+                }
+                g.writeEndArray();
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("grids");
+            for (LossAnalysis.GridSizing s : analysis.grids()) {
+                g.writeStartObject();
+                g.writeArrayFieldStart("parameters");
+                for (String p : s.parameters()) {
+                    g.writeString(p);
+                }
+                g.writeEndArray();
+                g.writeFieldName("chosen");
+                if (s.chosen() < 0) {
+                    g.writeNull();
+                } else {
+                    g.writeStartArray();
+                    for (String v : s.rows().get(s.chosen()).values()) {
+                        g.writeString(v);
+                    }
+                    g.writeEndArray();
+                }
+                g.writeStringField("reason", s.reason());
+                g.writeArrayFieldStart("tried");
+                for (LossAnalysis.GridRow r : s.rows()) {
+                    g.writeStartObject();
+                    g.writeArrayFieldStart("values");
+                    for (String v : r.values()) {
+                        g.writeString(v);
+                    }
+                    g.writeEndArray();
+                    g.writeNumberField("design", r.design());
+                    g.writeNumberField("bits", r.bits());
                     num(g, "loss-at-ber-db", Numbers.fixed(r.lossBerDb(), 4));
                     num(g, "loss-at-gmi-db", Numbers.fixed(r.lossGmiDb(), 4));
                     g.writeBooleanField("within-budget", r.withinBudget());
@@ -207,6 +263,35 @@ public final class LossReport {
         return sb.toString();
     }
 
+    /**
+     * One row per value of each sweep, then per combination of each grid ({@code kind} says which); the second
+     * parameter and value and the bits (a grid's cost) are empty for a sweep; {@code chosen} marks the
+     * recommendation.
+     */
+    String sizingCsv() {
+        StringBuilder sb = new StringBuilder("kind,parameter,value,second_parameter,second_value,design,bits,"
+                + "loss_at_ber_db,loss_at_gmi_db,within_budget,chosen\n");
+        for (LossAnalysis.Sizing s : analysis.sizing()) {
+            for (LossAnalysis.SizingRow r : s.rows()) {
+                sb.append("sweep,").append(s.parameter()).append(',').append(r.value()).append(",,,")
+                        .append(r.design()).append(",,").append(Numbers.fixed(r.lossBerDb(), 4)).append(',')
+                        .append(Numbers.fixed(r.lossGmiDb(), 4)).append(',').append(r.withinBudget()).append(',')
+                        .append(r.value().equals(s.chosen())).append('\n');
+            }
+        }
+        for (LossAnalysis.GridSizing s : analysis.grids()) {
+            for (int i = 0; i < s.rows().size(); i++) {
+                LossAnalysis.GridRow r = s.rows().get(i);
+                sb.append("grid,").append(s.parameters().get(0)).append(',').append(r.values().get(0)).append(',')
+                        .append(s.parameters().get(1)).append(',').append(r.values().get(1)).append(',')
+                        .append(r.design()).append(',').append(r.bits()).append(',')
+                        .append(Numbers.fixed(r.lossBerDb(), 4)).append(',').append(Numbers.fixed(r.lossGmiDb(), 4))
+                        .append(',').append(r.withinBudget()).append(',').append(i == s.chosen()).append('\n');
+            }
+        }
+        return sb.toString();
+    }
+
     // ---- Markdown (also the text of the HTML) ----
 
     private String headline() {
@@ -227,7 +312,7 @@ public final class LossReport {
         sb.append("> ").append(CAUTION).append("\n\n");
         sb.append(headline()).append("\n\n");
         sb.append("## Sizing\n\n");
-        if (analysis.sizing().isEmpty()) {
+        if (analysis.sizing().isEmpty() && analysis.grids().isEmpty()) {
             sb.append("No sweep in the specification.\n\n");
         }
         for (LossAnalysis.Sizing s : analysis.sizing()) {
@@ -242,6 +327,9 @@ public final class LossReport {
             }
             sb.append('\n');
         }
+        for (LossAnalysis.GridSizing s : analysis.grids()) {
+            gridMarkdown(sb, s);
+        }
         sb.append("## Designs\n\n| design | description | loss at BER (dB) | loss at GMI (dB) | max LLR saturation |\n")
                 .append("|---|---|---|---|---|\n");
         for (LossAnalysis.DesignFigures f : analysis.designs()) {
@@ -249,6 +337,7 @@ public final class LossReport {
                     .append(Numbers.fixed(f.lossBerDb(), 3)).append(" | ").append(Numbers.fixed(f.lossGmiDb(), 3))
                     .append(" | ").append(Numbers.sci(f.maxOutputSaturation(), 3)).append(" |\n");
         }
+        rangeTable(sb);
         LossAnalysis.DesignFigures base = analysis.designs().get(0);
         sb.append("\n## Static figures (base design)\n\n| table | format | E_s | d_min² | EVM (%) | EVM (dB) |"
                 + " power-efficiency loss (dB) |\n|---|---|---|---|---|---|---|\n");
@@ -264,7 +353,9 @@ public final class LossReport {
                 .append(Numbers.fixed(in.sqnrMeasuredDb(), 2)).append(" dB, clip rate ")
                 .append(Numbers.sci(in.clipRateMeasured(), 3)).append(".\n\n");
         LossAnalysis.Range r = base.range();
-        sb.append("Range analysis: metric stage ").append(r.metricFormat()).append(" cannot overflow for any input code;")
+        sb.append("Range analysis: metric stage ").append(r.metricFormat()).append(r.metricCannotOverflow()
+                        ? " cannot overflow for any input code;" : " has fewer integer bits than the "
+                        + r.metricIntegerBitsNoOverflow() + " with which no input code can overflow it;")
                 .append(" scale constant ").append(r.scaleConstantFormat()).append("; scale stage ")
                 .append(r.scaleFormat()).append(". The largest |LLR| any input can produce at the highest Eb/N0 is ")
                 .append(Numbers.fixed(r.maxLlrNats(), 2)).append(" nats: an output with ")
@@ -291,6 +382,74 @@ public final class LossReport {
                 + " crossed on the grid). GMI is the BICM generalized mutual information estimated from the LLRs;"
                 + " the fixed GMI reads code c as c·LSB/scale nats. Hard decisions are the LLR signs.\n");
         return sb.toString();
+    }
+
+    /** A grid: the loss at the sizing measure over the combinations, then every combination's figures. */
+    private void gridMarkdown(StringBuilder sb, LossAnalysis.GridSizing s) {
+        String first = s.parameters().get(0);
+        String second = s.parameters().get(1);
+        boolean ber = spec.targets().sizingMeasure().equals("ber");
+        sb.append("### grid ").append(first).append(" × ").append(second).append(": choose ")
+                .append(s.chosen() < 0 ? Numbers.NONE
+                        : LossSpecReader.combination(s.parameters(), s.rows().get(s.chosen()).values()))
+                .append("\n\n").append(s.reason()).append(".\n\nLoss at ").append(ber ? "BER" : "GMI")
+                .append(" (dB), ").append(first).append(" down, ").append(second)
+                .append(" across; ✗ over the budget, bold the choice:\n\n| ").append(first).append(" \\ ")
+                .append(second).append(" |");
+        List<String> across = s.values().get(1);
+        for (String v : across) {
+            sb.append(' ').append(v).append(" |");
+        }
+        sb.append("\n|---|").append("---|".repeat(across.size())).append('\n');
+        for (int i = 0; i < s.rows().size(); i++) {
+            LossAnalysis.GridRow r = s.rows().get(i);
+            if (i % across.size() == 0) {
+                sb.append("| ").append(r.values().get(0)).append(" |");
+            }
+            String loss = Numbers.fixed(ber ? r.lossBerDb() : r.lossGmiDb(), 3);
+            sb.append(' ').append(i == s.chosen() ? "**" + loss + "**" : r.withinBudget() ? loss : loss + " ✗")
+                    .append(" |");
+            if (i % across.size() == across.size() - 1) {
+                sb.append('\n');
+            }
+        }
+        sb.append("\n| ").append(first).append(" | ").append(second).append(" | design | bits | loss at BER (dB) |"
+                + " loss at GMI (dB) | within budget |\n|---|---|---|---|---|---|---|\n");
+        for (LossAnalysis.GridRow r : s.rows()) {
+            sb.append("| ").append(r.values().get(0)).append(" | ").append(r.values().get(1)).append(" | ")
+                    .append(r.design()).append(" | ").append(r.bits()).append(" | ")
+                    .append(Numbers.fixed(r.lossBerDb(), 3)).append(" | ").append(Numbers.fixed(r.lossGmiDb(), 3))
+                    .append(" | ").append(r.withinBudget() ? "yes" : "no").append(" |\n");
+        }
+        sb.append('\n');
+    }
+
+    /**
+     * Per design the stages as simulated and the overflow events their counters saw over all points: where the
+     * datapath saturates inside, not only at its output.
+     */
+    private void rangeTable(StringBuilder sb) {
+        sb.append("\n## Range analysis per design\n\nOverflow events over all points of each design (input clips"
+                + " per real sample, the LLR stages per LLR); \"needs\" is the metric's integer bits with which no"
+                + " input code can overflow it (the kernel's range analysis).\n\n| design | metric | needs |"
+                + " metric overflows | scale constant | scale | scale overflows | LLR | LLR saturations |"
+                + " input clips |\n|---|---|---|---|---|---|---|---|---|---|\n");
+        for (LossAnalysis.DesignFigures f : analysis.designs()) {
+            FixedLlrSpec st = f.range().stages();
+            LossAnalysis.Overflows o = f.overflows();
+            sb.append("| ").append(f.index()).append(" | ").append(st.metric().format()).append(" | ")
+                    .append(f.range().metricIntegerBitsNoOverflow()).append(" | ").append(events(o.metric(), o.llrs()))
+                    .append(" | ").append(st.isScaled() ? st.scaleConstant().toString() : "none").append(" | ")
+                    .append(st.isScaled() ? st.scale().format().toString() : "none").append(" | ")
+                    .append(st.isScaled() ? events(o.scale(), o.llrs()) : "none").append(" | ")
+                    .append(st.output().format()).append(" | ").append(events(o.output(), o.llrs())).append(" | ")
+                    .append(events(o.inputClips(), o.inputSamples())).append(" |\n");
+        }
+    }
+
+    /** {@code 12 (3.00e-4)}: a count and its rate. */
+    private static String events(long count, long of) {
+        return count + " (" + Numbers.sci(of == 0 ? 0 : (double) count / of, 2) + ")";
     }
 
     private static void romRow(StringBuilder sb, String what, LossAnalysis.RomFigures r) {
@@ -332,6 +491,9 @@ public final class LossReport {
                 chart(sb, Charts.loss(s, spec.targets().budgetDb(), "loss-" + s.parameter()));
             }
         }
+        for (LossAnalysis.GridSizing s : analysis.grids()) {
+            gridHtml(sb, s);
+        }
         sb.append("<h2>Curves</h2>\n");
         chart(sb, Charts.ber(base, spec.targets().ber()));
         chart(sb, Charts.gmi(base, spec.targets().gmi()));
@@ -343,6 +505,36 @@ public final class LossReport {
         chart(sb, Charts.transfer(base.design(), n0, smallest));
         sb.append("<h2>Tables</h2>\n<pre>").append(esc(markdown())).append("</pre>\n</body></html>\n");
         return sb.toString();
+    }
+
+    /** A grid's loss table: the first parameter down, the second across; within budget shaded, the choice bold. */
+    private void gridHtml(StringBuilder sb, LossAnalysis.GridSizing s) {
+        boolean ber = spec.targets().sizingMeasure().equals("ber");
+        sb.append("<h3>grid ").append(esc(s.parameters().get(0))).append(" &times; ")
+                .append(esc(s.parameters().get(1))).append(": choose ")
+                .append(esc(s.chosen() < 0 ? Numbers.NONE
+                        : LossSpecReader.combination(s.parameters(), s.rows().get(s.chosen()).values())))
+                .append("</h3>\n<p>").append(esc(s.reason())).append(". Loss at ").append(ber ? "BER" : "GMI")
+                .append(" (dB); shaded: within the budget; bold: the choice.</p>\n<table><tr><th>")
+                .append(esc(s.parameters().get(0))).append(" \\ ").append(esc(s.parameters().get(1))).append("</th>");
+        List<String> across = s.values().get(1);
+        for (String v : across) {
+            sb.append("<th>").append(esc(v)).append("</th>");
+        }
+        sb.append("</tr>\n");
+        for (int i = 0; i < s.rows().size(); i++) {
+            LossAnalysis.GridRow r = s.rows().get(i);
+            if (i % across.size() == 0) {
+                sb.append("<tr><th>").append(esc(r.values().get(0))).append("</th>");
+            }
+            String loss = Numbers.fixed(ber ? r.lossBerDb() : r.lossGmiDb(), 3);
+            sb.append(r.withinBudget() ? "<td style=\"background:#e3f4e3\">" : "<td>")
+                    .append(i == s.chosen() ? "<b>" + loss + "</b>" : loss).append("</td>");
+            if (i % across.size() == across.size() - 1) {
+                sb.append("</tr>\n");
+            }
+        }
+        sb.append("</table>\n");
     }
 
     private static void chart(StringBuilder sb, String svg) {

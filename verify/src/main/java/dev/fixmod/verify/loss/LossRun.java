@@ -9,8 +9,8 @@ import java.util.concurrent.Executors;
 import java.util.function.IntConsumer;
 
 /**
- * The work of a loss specification: the distinct designs (the base first, then each sweep value not already listed)
- * times the Eb/N0 grid, numbered design-major. A shard {@code i/n} runs the points whose number is {@code i − 1}
+ * The work of a loss specification: the distinct designs (the base first, then each sweep value not already listed,
+ * then each grid combination not already listed) times the Eb/N0 grid, numbered design-major. A shard {@code i/n} runs the points whose number is {@code i − 1}
  * modulo {@code n}; the merged points of all shards are the points of an unsharded run.
  */
 public final class LossRun {
@@ -23,6 +23,13 @@ public final class LossRun {
         list.add(spec.base());
         for (LossSpec.Sweep s : spec.sweeps()) {
             for (Design d : s.designs()) {
+                if (!list.contains(d)) {
+                    list.add(d);
+                }
+            }
+        }
+        for (LossSpec.Grid g : spec.grids()) {
+            for (Design d : g.designs()) {
                 if (!list.contains(d)) {
                     list.add(d);
                 }
@@ -77,19 +84,40 @@ public final class LossRun {
     }
 
     /**
+     * Checks that {@code r} is a point of this run: its design and Eb/N0 exist and its bits per symbol and LLR code
+     * range are its design's.
+     *
+     * @throws IllegalArgumentException naming the point, what it holds and what its design has
+     */
+    public void check(PointResult r) {
+        int snrs = spec.ebN0Db().size();
+        if (r.design() < 0 || r.design() >= designs.size() || r.snr() < 0 || r.snr() >= snrs) {
+            throw new IllegalArgumentException("point (design " + r.design() + ", Eb/N0 " + r.snr()
+                    + ") does not belong to this specification's " + designs.size() + " designs and " + snrs
+                    + " Eb/N0 values");
+        }
+        Design d = designs.get(r.design());
+        int k = d.constellation().bitsPerSymbol();
+        var out = d.llr().format();
+        if (r.bitsPerSymbol() != k || r.minCode() != out.minCode() || r.maxCode() != out.maxCode()) {
+            throw new IllegalArgumentException("point (design " + r.design() + ", Eb/N0 " + r.snr() + ") has "
+                    + r.bitsPerSymbol() + " bits per symbol and LLR codes " + r.minCode() + ".." + r.maxCode()
+                    + ", but design " + r.design() + " of this specification (" + d.describe() + ") has " + k
+                    + " and " + out.minCode() + ".." + out.maxCode() + "; the part comes from another run or another"
+                    + " version of fixmod: rerun its shard");
+        }
+    }
+
+    /**
      * The points of all shards in point order.
      *
-     * @throws IllegalArgumentException if a point is missing, given twice or does not belong to this run
+     * @throws IllegalArgumentException if a point is missing, given twice or fails {@link #check}
      */
     public List<PointResult> assemble(List<PointResult> parts) {
         int snrs = spec.ebN0Db().size();
         Map<Integer, PointResult> byIndex = new TreeMap<>();
         for (PointResult r : parts) {
-            if (r.design() < 0 || r.design() >= designs.size() || r.snr() < 0 || r.snr() >= snrs) {
-                throw new IllegalArgumentException("point (design " + r.design() + ", Eb/N0 " + r.snr()
-                        + ") does not belong to this specification's " + designs.size() + " designs and " + snrs
-                        + " Eb/N0 values");
-            }
+            check(r);
             if (byIndex.put(r.design() * snrs + r.snr(), r) != null) {
                 throw new IllegalArgumentException("point (design " + r.design() + ", Eb/N0 " + r.snr()
                         + ") is given twice; give each shard once");

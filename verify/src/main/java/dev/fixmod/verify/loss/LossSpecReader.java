@@ -15,6 +15,7 @@ import dev.fixmod.constellation.Catalogue;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Labeling;
 import dev.fixmod.constellation.Normalization;
+import dev.fixmod.demap.FixedLlrSpec;
 import dev.fixmod.demap.LlrScaling;
 import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.fixed.Overflow;
@@ -35,8 +36,11 @@ import java.util.function.Function;
  * are refused with one message naming the source, line and column, the key's path and what would be accepted. The
  * vocabulary is the vector specification's where the idea is the same ({@code constellation}, {@code mapper},
  * {@code demapper.input}, {@code demapper.algorithm}, {@code demapper.reference}, {@code demapper.scaling},
- * {@code demapper.llr}, {@code noise}); the rest is the loss analysis's own. The shortest spec is {@code {}}: 16-QAM,
- * input Q2.9, max-log, LLR Q5.0.
+ * {@code demapper.metric}, {@code demapper.scale-constant}, {@code demapper.scale}, {@code demapper.llr},
+ * {@code noise}); the rest is the loss analysis's own. The shortest spec is {@code {}}: 16-QAM, input Q2.9, max-log,
+ * LLR Q5.0, internal stages as the kernel suggests. {@code demapper.rounding} is the rounding of the constants and
+ * the default of every stage's. A {@code sweep} entry varies one parameter ({@code parameter}, {@code values}) or
+ * crosses two ({@code grid}: two such entries; every combination is a design).
  *
  * <pre>{@code
  * {"schema": "fixmod-loss", "version": 1, "name": "nr16",
@@ -44,11 +48,15 @@ import java.util.function.Function;
  *  "mapper": {"format": "Q1.14"},
  *  "demapper": {"input": {"format": "Q2.9", "rounding": "half-even", "overflow": "saturate"},
  *               "back-off-db": 3, "algorithm": "max-log", "reference": "max-log", "scaling": "noise-scaled",
- *               "llr": {"format": "Q5.0"}, "llr-scale": 1, "rounding": "half-even"},
+ *               "metric": {"format": "Q6.12", "overflow": "saturate"}, "scale-constant": "UQ4.12",
+ *               "scale": {"format": "Q7.4"}, "llr": {"format": "Q5.0"}, "llr-scale": 1, "rounding": "half-even"},
  *  "noise": {"eb-n0-db": [4, 6, 8, 10], "code-rate": 1, "seed": 1, "gaussian": "box-muller"},
  *  "simulation": {"target-errors": 200, "min-bits": 100000, "max-bits": 1000000, "chunk-symbols": 4096},
  *  "targets": {"ber": 1e-3, "gmi": 3.0, "loss-budget-db": 0.1, "sizing": "gmi", "operating-eb-n0-db": 8},
- *  "sweep": [{"parameter": "llr-word-length", "values": [3, 4, 5, 6, 8]}]}
+ *  "sweep": [{"parameter": "llr-word-length", "values": [3, 4, 5, 6, 8]},
+ *            {"parameter": "metric-word-length", "values": [8, 10, 12, 19]},
+ *            {"grid": [{"parameter": "input-word-length", "values": [6, 8, 10]},
+ *                      {"parameter": "llr-word-length", "values": [4, 5, 6]}]}]}
  * }</pre>
  */
 public final class LossSpecReader {
@@ -73,6 +81,8 @@ public final class LossSpecReader {
     private static final int MAX_POINTS = 64;
     private static final int MAX_SWEEP_VALUES = 32;
     private static final int MAX_SWEEPS = 8;
+    /** The most combinations of one grid: as many designs as the eight one-parameter sweeps may add. */
+    static final int MAX_GRID_POINTS = MAX_SWEEPS * MAX_SWEEP_VALUES;
     /**
      * Most bits one run may simulate over all its points (points x max-bits, rounded up to whole chunks): about ten
      * minutes on two cores. A spec that asks for more would run for hours; it is refused before anything runs.
@@ -144,9 +154,6 @@ public final class LossSpecReader {
             throw error("/name", "'" + name + "' is not a name; expected a letter then up to 63 letters, digits, '_'"
                     + " or '-'");
         }
-        Quantizer mapper = quantizer(top, "", "mapper", "Q1.14", Rounding.HALF_EVEN, Overflow.SATURATE);
-        Design base = demapper(top, constellation, mapper);
-
         String p = "/noise";
         ObjectNode n = optionalObject(top, "", "noise");
         allow(n, p, "eb-n0-db", "es-n0-db", "code-rate", "seed", "gaussian");
@@ -190,6 +197,10 @@ public final class LossSpecReader {
             throw error(p + "/gaussian", e.getMessage());
         }
 
+        Quantizer mapper = quantizer(top, "", "mapper", "Q1.14", Rounding.HALF_EVEN, Overflow.SATURATE);
+        double smallestN0 = Simulation.n0(constellation, grid.get(grid.size() - 1), rate);
+        Design base = demapper(top, constellation, mapper, smallestN0);
+
         p = "/simulation";
         ObjectNode s = optionalObject(top, "", "simulation");
         allow(s, p, "target-errors", "min-bits", "max-bits", "chunk-symbols");
@@ -229,22 +240,38 @@ public final class LossSpecReader {
         }
         LossSpec.Targets targets = new LossSpec.Targets(ber, gmi, budget, sizing, operating);
 
-        List<LossSpec.Sweep> sweeps = sweeps(top, base);
-        bounded(simulation, grid.size(), sweeps, k);
-        validate(base, "/demapper", grid, constellation, rate);
+        validate(base, "/demapper", "", grid, constellation, rate);
+        List<LossSpec.Sweep> sweeps = new ArrayList<>();
+        List<LossSpec.Grid> grids = new ArrayList<>();
+        List<String> sweepPointers = new ArrayList<>();
+        List<String> gridPointers = new ArrayList<>();
+        sweeps(top, base, smallestN0, sweeps, sweepPointers, grids, gridPointers);
+        bounded(simulation, grid.size(), sweeps, grids, k);
         for (int i = 0; i < sweeps.size(); i++) {
             for (int j = 0; j < sweeps.get(i).designs().size(); j++) {
-                validate(sweeps.get(i).designs().get(j), "/sweep/" + i + "/values/" + j, grid, constellation, rate);
+                validate(sweeps.get(i).designs().get(j), sweepPointers.get(i) + "/values/" + j, "", grid,
+                        constellation, rate);
             }
         }
-        return new LossSpec(name, description, base, grid, rate, seed, gaussian, simulation, targets, sweeps);
+        for (int i = 0; i < grids.size(); i++) {
+            LossSpec.Grid g = grids.get(i);
+            for (int j = 0; j < g.designs().size(); j++) {
+                validate(g.designs().get(j), gridPointers.get(i), combination(g.parameters(), g.combination(j)) + ": ",
+                        grid, constellation, rate);
+            }
+        }
+        return new LossSpec(name, description, base, grid, rate, seed, gaussian, simulation, targets, sweeps, grids);
     }
 
     /** Refuses a run whose worst case (every point to max-bits) exceeds {@link #MAX_RUN_BITS}. */
-    private void bounded(LossSpec.Simulation sim, int levels, List<LossSpec.Sweep> sweeps, int bitsPerSymbol) {
+    private void bounded(LossSpec.Simulation sim, int levels, List<LossSpec.Sweep> sweeps, List<LossSpec.Grid> grids,
+                         int bitsPerSymbol) {
         long designs = 1;
         for (LossSpec.Sweep s : sweeps) {
             designs += s.designs().size();
+        }
+        for (LossSpec.Grid g : grids) {
+            designs += g.designs().size();
         }
         long chunkBits = (long) sim.chunkSymbols() * bitsPerSymbol;
         long perPoint = (sim.maxBits() + chunkBits - 1) / chunkBits * chunkBits;
@@ -252,12 +279,16 @@ public final class LossSpecReader {
         if (perPoint > MAX_RUN_BITS / points) {
             throw error("/simulation/max-bits", "the run could simulate " + points + " points x " + perPoint
                     + " bits, more than the limit of " + MAX_RUN_BITS + " bits per run (hours of work); lower max-bits,"
-                    + " the number of Eb/N0 points or sweep values, or split the sweep over several specifications");
+                    + " the number of Eb/N0 points or sweep values (a grid counts each combination), or split the"
+                    + " sweep over several specifications");
         }
     }
 
-    /** Builds every datapath the run will build, so that a design that cannot be built is reported here. */
-    private void validate(Design d, String pointer, List<Double> grid, Constellation c, double rate) {
+    /**
+     * Builds every datapath the run will build, so that a design that cannot be built is reported here, at
+     * {@code pointer}, its message after {@code prefix}.
+     */
+    private void validate(Design d, String pointer, String prefix, List<Double> grid, Constellation c, double rate) {
         try {
             d.transmitRom();
             var rx = d.receiveRom();
@@ -271,8 +302,13 @@ public final class LossSpecReader {
                 d.floatDemapper(v);
             }
         } catch (IllegalArgumentException e) {
-            throw error(pointer, e.getMessage());
+            throw error(pointer, prefix + e.getMessage());
         }
+    }
+
+    /** {@code input-word-length = 6, llr-word-length = 5}: a grid's combination as messages and reports name it. */
+    public static String combination(List<String> parameters, List<String> values) {
+        return parameters.get(0) + " = " + values.get(0) + ", " + parameters.get(1) + " = " + values.get(1);
     }
 
     private Constellation constellation(ObjectNode top) {
@@ -298,10 +334,11 @@ public final class LossSpecReader {
         }
     }
 
-    private Design demapper(ObjectNode top, Constellation constellation, Quantizer mapper) {
+    private Design demapper(ObjectNode top, Constellation constellation, Quantizer mapper, double smallestN0) {
         String p = "/demapper";
         ObjectNode d = optionalObject(top, "", "demapper");
-        allow(d, p, "input", "back-off-db", "algorithm", "reference", "scaling", "llr", "llr-scale", "rounding");
+        allow(d, p, "input", "back-off-db", "algorithm", "reference", "scaling", "metric", "scale-constant", "scale",
+                "llr", "llr-scale", "rounding");
         Rounding rounding = named(d, p, "rounding", Rounding.HALF_EVEN.tradeName(), Rounding::fromName);
         Quantizer input = quantizer(d, p, "input", "Q2.9", rounding, Overflow.SATURATE);
         if (input.format().wordLength() > 30) {
@@ -318,66 +355,180 @@ public final class LossSpecReader {
         LlrScaling scaling = named(d, p, "scaling", LlrScaling.NOISE_SCALED.tradeName(), LlrScaling::fromName);
         Quantizer llr = quantizer(d, p, "llr", "Q5.0", rounding, Overflow.SYMMETRIC_SATURATE);
         double scale = number(d, p, "llr-scale", 1.0);
+        Design design;
         try {
-            return new Design(constellation, mapper, input, backOff, algorithm, reference, scaling, llr, scale,
-                    rounding);
+            design = new Design(constellation, mapper, input, backOff, algorithm, reference, scaling, null, null, null,
+                    llr, scale, rounding);
         } catch (IllegalArgumentException e) {
             String at = e.getMessage().startsWith("LLR scale") ? "/llr-scale"
                     : e.getMessage().startsWith("back-off") ? "/back-off-db" : "/llr/format";
             throw error(p + at, e.getMessage());
         }
+        return stages(d, p, design, smallestN0);
     }
 
-    private List<LossSpec.Sweep> sweeps(ObjectNode top, Design base) {
+    /**
+     * The internal stages the spec gives ({@code metric}, {@code scale-constant}, {@code scale}, as in a vector
+     * specification); a key left out, or a field of one, is the kernel's suggestion with the design's rounding.
+     */
+    private Design stages(ObjectNode d, String p, Design design, double smallestN0) {
+        if (!d.has("metric") && !d.has("scale-constant") && !d.has("scale")) {
+            return design;
+        }
+        if (design.scaling() == LlrScaling.UNSCALED) {
+            for (String key : new String[] {"scale-constant", "scale"}) {
+                if (d.has(key)) {
+                    throw error(p + "/" + key, "an unscaled datapath has no " + key + "; remove the key or use"
+                            + " \"scaling\": \"noise-scaled\"");
+                }
+            }
+        }
+        FixedLlrSpec suggested;
+        try {
+            suggested = design.llrSpec(design.receiveRom(), smallestN0);
+        } catch (IllegalArgumentException e) {
+            throw error(p, e.getMessage());
+        }
+        Design out = design;
+        if (d.has("metric")) {
+            Quantizer m = suggested.metric();
+            out = out.withMetric(quantizer(d, p, "metric", m.format().toString(), m.rounding(), m.overflow()));
+        }
+        if (d.has("scale-constant")) {
+            out = out.withScaleConstant(named(d, p, "scale-constant", suggested.scaleConstant().toString(),
+                    QFormat::parse));
+        }
+        if (d.has("scale")) {
+            Quantizer m = suggested.scale();
+            out = out.withScale(quantizer(d, p, "scale", m.format().toString(), m.rounding(), m.overflow()));
+        }
+        return out;
+    }
+
+    private void sweeps(ObjectNode top, Design base, double smallestN0, List<LossSpec.Sweep> sweeps,
+                        List<String> sweepPointers, List<LossSpec.Grid> grids, List<String> gridPointers) {
         JsonNode arr = top.get("sweep");
-        List<LossSpec.Sweep> out = new ArrayList<>();
         if (arr == null) {
-            return out;
+            return;
         }
         if (!arr.isArray()) {
-            throw error("/sweep", "expected an array of {\"parameter\": ..., \"values\": [...]}, got " + kind(arr));
+            throw error("/sweep", "expected an array of {\"parameter\": ..., \"values\": [...]} or"
+                    + " {\"grid\": [...]}, got " + kind(arr));
         }
         if (arr.size() > MAX_SWEEPS) {
-            throw error("/sweep", arr.size() + " sweeps; expected at most " + MAX_SWEEPS);
+            throw error("/sweep", arr.size() + " sweeps; expected at most " + MAX_SWEEPS + " (a grid counts as one)");
         }
         for (int i = 0; i < arr.size(); i++) {
             String p = "/sweep/" + i;
             ObjectNode s = object(arr.get(i), p);
-            allow(s, p, "parameter", "values");
+            if (s.has("grid")) {
+                for (Iterator<String> it = s.fieldNames(); it.hasNext(); ) {
+                    String k = it.next();
+                    if (!k.equals("grid")) {
+                        throw error(p + "/" + k.replace("~", "~0").replace("/", "~1"), "unknown key \"" + k
+                                + "\" beside \"grid\"; a grid entry holds only \"grid\": [{\"parameter\": ...,"
+                                + " \"values\": [...]}, {\"parameter\": ..., \"values\": [...]}]");
+                    }
+                }
+                grids.add(grid(s.get("grid"), p + "/grid", base, smallestN0));
+                gridPointers.add(p + "/grid");
+                continue;
+            }
+            allow(s, p, "parameter", "values", "grid");
             if (!s.has("parameter") || !s.has("values")) {
-                throw error(p, "a sweep needs \"parameter\" (one of " + SweepParameter.names() + ") and \"values\"");
+                throw error(p, "a sweep needs \"parameter\" (one of " + SweepParameter.names() + ") and \"values\","
+                        + " or \"grid\": two such sweeps to cross");
             }
-            SweepParameter parameter = named(s, p, "parameter", "", SweepParameter::fromName);
-            JsonNode values = s.get("values");
-            if (!values.isArray() || values.size() < 1 || values.size() > MAX_SWEEP_VALUES) {
-                throw error(p + "/values", "expected an array of 1 to " + MAX_SWEEP_VALUES + " values");
-            }
-            List<String> labels = new ArrayList<>();
+            Axis axis = axis(s, p, base, smallestN0);
             List<Design> designs = new ArrayList<>();
-            for (int j = 0; j < values.size(); j++) {
-                String vp = p + "/values/" + j;
-                JsonNode v = values.get(j);
-                String label;
-                if (parameter.isNumeric()) {
-                    label = Numbers.plain(finite(v, vp));
-                } else if (v.isTextual()) {
-                    label = v.asText();
-                } else {
-                    throw error(vp, "expected a name, got " + kind(v));
-                }
-                if (labels.contains(label)) {
-                    throw error(vp, "'" + label + "' is listed twice");
-                }
-                try {
-                    designs.add(parameter.apply(base, label));
-                } catch (IllegalArgumentException e) {
-                    throw error(vp, e.getMessage());
-                }
-                labels.add(label);
+            for (String label : axis.labels()) {
+                designs.add(axis.parameter().apply(base, label, smallestN0));
             }
-            out.add(new LossSpec.Sweep(parameter.tradeName(), labels, designs));
+            sweeps.add(new LossSpec.Sweep(axis.parameter().tradeName(), axis.labels(), designs));
+            sweepPointers.add(p);
         }
-        return out;
+    }
+
+    /** A one-parameter sweep or a grid's axis: the parameter and its value labels. */
+    private record Axis(SweepParameter parameter, List<String> labels) {
+    }
+
+    /** Reads {@code {"parameter": ..., "values": [...]}}, checking each value on {@code base} at its own path. */
+    private Axis axis(ObjectNode s, String p, Design base, double smallestN0) {
+        allow(s, p, "parameter", "values");
+        if (!s.has("parameter") || !s.has("values")) {
+            throw error(p, "a sweep needs \"parameter\" (one of " + SweepParameter.names() + ") and \"values\"");
+        }
+        SweepParameter parameter = named(s, p, "parameter", "", SweepParameter::fromName);
+        JsonNode values = s.get("values");
+        if (!values.isArray() || values.size() < 1 || values.size() > MAX_SWEEP_VALUES) {
+            throw error(p + "/values", "expected an array of 1 to " + MAX_SWEEP_VALUES + " values");
+        }
+        List<String> labels = new ArrayList<>();
+        for (int j = 0; j < values.size(); j++) {
+            String vp = p + "/values/" + j;
+            JsonNode v = values.get(j);
+            String label;
+            if (parameter.isNumeric()) {
+                label = Numbers.plain(finite(v, vp));
+            } else if (v.isTextual()) {
+                label = v.asText();
+            } else {
+                throw error(vp, "expected a name, got " + kind(v));
+            }
+            if (labels.contains(label)) {
+                throw error(vp, "'" + label + "' is listed twice");
+            }
+            try {
+                parameter.apply(base, label, smallestN0);
+            } catch (IllegalArgumentException e) {
+                throw error(vp, e.getMessage());
+            }
+            labels.add(label);
+        }
+        return new Axis(parameter, labels);
+    }
+
+    /**
+     * Reads {@code [axis, axis]}: two parameters that set different things, at most {@link #MAX_GRID_POINTS}
+     * combinations. Each combination applies the two values in {@link SweepParameter}'s order.
+     */
+    private LossSpec.Grid grid(JsonNode node, String p, Design base, double smallestN0) {
+        String shape = "an array of two sweeps [{\"parameter\": ..., \"values\": [...]}, {\"parameter\": ...,"
+                + " \"values\": [...]}]";
+        if (!node.isArray() || node.size() != 2) {
+            throw error(p, "expected " + shape + ", got " + (node.isArray() ? "an array of " + node.size()
+                    : kind(node)));
+        }
+        Axis first = axis(object(node.get(0), p + "/0"), p + "/0", base, smallestN0);
+        Axis second = axis(object(node.get(1), p + "/1"), p + "/1", base, smallestN0);
+        if (first.parameter().port().equals(second.parameter().port())) {
+            throw error(p + "/1/parameter", first.parameter().tradeName() + " and " + second.parameter().tradeName()
+                    + " both set " + first.parameter().port() + "; a grid crosses two parameters that set different"
+                    + " things");
+        }
+        int combinations = first.labels().size() * second.labels().size();
+        if (combinations > MAX_GRID_POINTS) {
+            throw error(p, first.labels().size() + " x " + second.labels().size() + " = " + combinations
+                    + " combinations; expected at most " + MAX_GRID_POINTS);
+        }
+        boolean inOrder = first.parameter().compareTo(second.parameter()) < 0;
+        Axis early = inOrder ? first : second;
+        Axis late = inOrder ? second : first;
+        List<String> names = List.of(first.parameter().tradeName(), second.parameter().tradeName());
+        List<Design> designs = new ArrayList<>();
+        for (String a : first.labels()) {
+            for (String b : second.labels()) {
+                String e = inOrder ? a : b;
+                String l = inOrder ? b : a;
+                try {
+                    designs.add(late.parameter().apply(early.parameter().apply(base, e, smallestN0), l, smallestN0));
+                } catch (IllegalArgumentException ex) {
+                    throw error(p, combination(names, List.of(a, b)) + ": " + ex.getMessage());
+                }
+            }
+        }
+        return new LossSpec.Grid(names, List.of(first.labels(), second.labels()), designs);
     }
 
     private <T> T named(ObjectNode parent, String parentPath, String key, String fallback, Function<String, T> lookup) {
