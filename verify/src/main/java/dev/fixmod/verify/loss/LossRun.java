@@ -10,8 +10,9 @@ import java.util.function.IntConsumer;
 
 /**
  * The work of a loss specification: the distinct designs (the base first, then each sweep value not already listed,
- * then each grid combination not already listed) times the Eb/N0 grid, numbered design-major. A shard {@code i/n} runs the points whose number is {@code i − 1}
- * modulo {@code n}; the merged points of all shards are the points of an unsharded run.
+ * then each grid combination not already listed) times the Eb/N0 grid, numbered design-major. A shard {@code i/n}
+ * runs the points whose number is {@code i − 1} modulo {@code n}; the merged points of all shards are the points of an
+ * unsharded run.
  */
 public final class LossRun {
     private final LossSpec spec;

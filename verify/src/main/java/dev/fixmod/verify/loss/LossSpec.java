@@ -70,7 +70,8 @@ public record LossSpec(String name, String description, Design base, List<Double
             designs = List.copyOf(designs);
             if (parameters.size() != 2 || values.size() != 2
                     || designs.size() != values.get(0).size() * values.get(1).size()) {
-                throw new IllegalArgumentException("a grid crosses two parameters and holds one design per combination");
+                throw new IllegalArgumentException("a grid crosses two parameters and holds one design per"
+                        + " combination");
             }
         }
 
