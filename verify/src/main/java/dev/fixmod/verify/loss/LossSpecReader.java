@@ -302,7 +302,10 @@ public final class LossSpecReader {
                 d.floatDemapper(v);
             }
         } catch (IllegalArgumentException e) {
-            throw error(pointer, prefix + e.getMessage());
+            // A given K that does not fit is the base's scale-constant key's fault, not the whole demapper's.
+            boolean k = pointer.equals("/demapper") && d.scaleConstant() != null
+                    && e.getMessage().startsWith("scale constant");
+            throw error(k ? pointer + "/scale-constant" : pointer, prefix + e.getMessage());
         }
     }
 
@@ -502,6 +505,10 @@ public final class LossSpecReader {
         }
         Axis first = axis(object(node.get(0), p + "/0"), p + "/0", base, smallestN0);
         Axis second = axis(object(node.get(1), p + "/1"), p + "/1", base, smallestN0);
+        if (first.parameter() == second.parameter()) {
+            throw error(p + "/1/parameter", first.parameter().tradeName() + " is crossed with itself; a grid crosses"
+                    + " two different parameters (list more values in one sweep instead)");
+        }
         if (first.parameter().port().equals(second.parameter().port())) {
             throw error(p + "/1/parameter", first.parameter().tradeName() + " and " + second.parameter().tradeName()
                     + " both set " + first.parameter().port() + "; a grid crosses two parameters that set different"
