@@ -101,6 +101,72 @@ class LossCommandTest {
         assertFalse(Files.exists(dir.resolve("m2")));
     }
 
+    /** A grid and an internal-stage sweep: designs with different LLR words, so parts can be told apart. */
+    private static final String GRID = "{\"constellation\": \"qpsk\", \"noise\": {\"eb-n0-db\": [0, 2, 4]},"
+            + " \"simulation\": {\"min-bits\": 2000, \"max-bits\": 4000, \"chunk-symbols\": 256},"
+            + " \"targets\": {\"ber\": 0.05, \"gmi\": 1.5, \"loss-budget-db\": 0.5},"
+            + " \"sweep\": [{\"grid\": [{\"parameter\": \"input-word-length\", \"values\": [4, 6]},"
+            + " {\"parameter\": \"llr-word-length\", \"values\": [3, 5]}]},"
+            + " {\"parameter\": \"metric-word-length\", \"values\": [6, 10]}]}";
+
+    @Test
+    void aGridShardedAndMergedEqualsUnshardedAndMismatchedPartsAreRefused() throws IOException {
+        Path spec = dir.resolve("grid.json");
+        Files.writeString(spec, GRID);
+        Run whole = run("loss", spec.toString(), "-o", dir.resolve("whole").toString(), "--threads", "2");
+        assertEquals(0, whole.status(), whole.err());
+        assertTrue(whole.out().contains("  grid input-word-length x llr-word-length: choose "), whole.out());
+        List<String> parts = new ArrayList<>(List.of("loss", "merge"));
+        for (int i = 3; i >= 1; i--) {
+            Path part = dir.resolve("part" + i + ".json");
+            Run r = run("loss", spec.toString(), "--shard", i + "/3", "-o", part.toString(), "--threads", "1");
+            assertEquals(0, r.status(), r.err());
+            parts.add(part.toString());
+        }
+        parts.add("-o");
+        parts.add(dir.resolve("merged").toString());
+        Run merged = run(parts.toArray(String[]::new));
+        assertEquals(0, merged.status(), merged.err());
+        for (String f : List.of("results.json", "results.csv", "sizing.csv", "report.md")) {
+            assertArrayEquals(Files.readAllBytes(dir.resolve("whole").resolve(f)),
+                    Files.readAllBytes(dir.resolve("merged").resolve(f)), f);
+        }
+        String md = Files.readString(dir.resolve("whole/report.md"));
+        assertTrue(md.contains("### grid input-word-length × llr-word-length: choose "), md);
+        assertTrue(md.contains("## Range analysis per design"), md);
+
+        // A part of another specification (one grid value differs) is refused by name.
+        Path other = dir.resolve("other.json");
+        Files.writeString(other, GRID.replace("[3, 5]", "[3, 6]"));
+        Path foreign = dir.resolve("foreign.json");
+        assertEquals(0, run("loss", other.toString(), "--shard", "2/3", "-o", foreign.toString(), "--threads", "1")
+                .status());
+        Run mixed = run("loss", "merge", dir.resolve("part1.json").toString(), foreign.toString(),
+                dir.resolve("part3.json").toString(), "-o", dir.resolve("m1").toString());
+        assertEquals(ExitStatus.USAGE, mixed.status());
+        assertEquals("fixmod loss merge: " + foreign + ": comes from another specification or shard count than "
+                + dir.resolve("part1.json") + "; merge the parts of one run only\n",
+                mixed.err().replace(System.lineSeparator(), "\n"));
+        assertFalse(Files.exists(dir.resolve("m1")));
+
+        // A point that claims another design than the one whose LLR word it holds is refused with both.
+        Path p2 = dir.resolve("part2.json");
+        String part = Files.readString(p2);
+        // designs: 0 the base, 1-2 the metric sweep, 3-6 the grid (3: input 4 bits, LLR 3 bits)
+        String moved = part.replaceFirst("\"design\":0,", "\"design\":3,");
+        assertTrue(!moved.equals(part));
+        Files.writeString(p2, moved);
+        Run wrong = run("loss", "merge", dir.resolve("part1.json").toString(), p2.toString(),
+                dir.resolve("part3.json").toString(), "-o", dir.resolve("m2").toString());
+        assertEquals(ExitStatus.USAGE, wrong.status());
+        assertEquals(1, wrong.err().strip().split("\n").length, wrong.err());
+        assertTrue(wrong.err().startsWith("fixmod loss merge: " + p2 + ": point (design 3, Eb/N0 "), wrong.err());
+        assertTrue(wrong.err().contains(" has 2 bits per symbol and LLR codes -32..31, but design 3 of this"
+                + " specification (in Q2.1, max-log, LLR Q2.0 scale 1, half-even) has 2 and -4..3; the part comes"
+                + " from another run"), wrong.err());
+        assertFalse(Files.exists(dir.resolve("m2")));
+    }
+
     @Test
     void damagedPartsGiveOneLineNamingTheFileAndTheKeyAndWriteNothing() throws IOException {
         Path spec = dir.resolve("small.json");
