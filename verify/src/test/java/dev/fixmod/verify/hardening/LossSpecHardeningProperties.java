@@ -25,9 +25,9 @@ import net.jqwik.api.lifecycle.AfterContainer;
 
 /**
  * {@code fixmod loss SPEC -o DIR} and {@code fixmod loss merge PART... -o DIR}: damaged loss specifications, hostile
- * sweeps, absurd amounts of work and damaged partial results must be refused before anything runs or is written: one
- * line, exit status 2, the output absent afterwards and nothing else in the sandbox changed. A spec asking for hours
- * of simulation is refused at once (the harness's time limit would catch a run that started).
+ * sweeps and grids, absurd amounts of work and damaged partial results must be refused before anything runs or is
+ * written: one line, exit status 2, the output absent afterwards and nothing else in the sandbox changed. A spec
+ * asking for hours of simulation is refused at once (the harness's time limit would catch a run that started).
  */
 class LossSpecHardeningProperties {
 
@@ -35,12 +35,18 @@ class LossSpecHardeningProperties {
     static final String SPEC = "{\"schema\": \"fixmod-loss\", \"version\": 1, \"name\": \"tiny\","
             + " \"constellation\": \"qam4\", \"mapper\": {\"format\": \"Q1.10\"},"
             + " \"demapper\": {\"input\": {\"format\": \"Q2.5\", \"overflow\": \"saturate\"}, \"back-off-db\": 3,"
-            + " \"algorithm\": \"max-log\", \"llr\": {\"format\": \"Q3.0\"}, \"llr-scale\": 1,"
+            + " \"algorithm\": \"max-log\", \"metric\": {\"format\": \"Q6.8\"}, \"scale-constant\": \"UQ2.10\","
+            + " \"scale\": {\"format\": \"Q5.4\"}, \"llr\": {\"format\": \"Q3.0\"}, \"llr-scale\": 1,"
             + " \"rounding\": \"half-even\"},"
             + " \"noise\": {\"eb-n0-db\": [4, 8], \"code-rate\": 0.5, \"seed\": 7},"
             + " \"simulation\": {\"target-errors\": 10, \"min-bits\": 512, \"max-bits\": 1024, \"chunk-symbols\": 64},"
             + " \"targets\": {\"ber\": 0.01, \"gmi\": 1.5, \"loss-budget-db\": 0.5, \"operating-eb-n0-db\": 6},"
-            + " \"sweep\": [{\"parameter\": \"llr-word-length\", \"values\": [3, 5]}]}";
+            + " \"sweep\": [{\"parameter\": \"llr-word-length\", \"values\": [3, 5]}, {\"grid\": GRID}]}"
+            .replace("GRID", LossSpecHardeningProperties.GRID);
+
+    /** The template's grid: two values of the metric stage's word length crossed with two LLR word lengths. */
+    static final String GRID = "[{\"parameter\": \"metric-word-length\", \"values\": [6, 9]},"
+            + " {\"parameter\": \"llr-word-length\", \"values\": [3, 4]}]";
 
     /** Each leaf as the text before its value and the value. */
     static final List<String[]> LEAVES = List.of(
@@ -56,7 +62,9 @@ class LossSpecHardeningProperties {
             new String[] {"\"chunk-symbols\": ", "64"}, new String[] {"\"ber\": ", "0.01"},
             new String[] {"\"gmi\": ", "1.5"}, new String[] {"\"loss-budget-db\": ", "0.5"},
             new String[] {"\"operating-eb-n0-db\": ", "6"}, new String[] {"\"parameter\": ", "\"llr-word-length\""},
-            new String[] {"\"values\": [", "3"});
+            new String[] {"\"values\": [", "3"}, new String[] {"\"metric\": {\"format\": ", "\"Q6.8\""},
+            new String[] {"\"scale-constant\": ", "\"UQ2.10\""}, new String[] {"\"scale\": {\"format\": ", "\"Q5.4\""},
+            new String[] {"{\"grid\": ", GRID}, new String[] {"\"values\": [", "6"});
 
     /** Values no leaf accepts: non-finite, beyond every range, wrong kinds, escapes, nesting, megabyte strings. */
     static final List<String> HOSTILE = List.of("NaN", "Infinity", "-Infinity", "1e400", "-1e400", "1e308", "-1e308",
@@ -79,14 +87,38 @@ class LossSpecHardeningProperties {
                     "{\"parameter\": \"llr-scale\", \"values\": [0.5]}")) + "]",
             "[{\"parameter\": \"rounding\", \"values\": [\"half up\"]}]",
             "[{\"parameter\": \"rounding\", \"values\": [1]}]",
-            "[{\"parameter\": \"algorithm\", \"values\": [\"log-map\"]}]");
+            "[{\"parameter\": \"algorithm\", \"values\": [\"log-map\"]}]",
+            "[{\"grid\": null}]", "[{\"grid\": []}]", "[{\"grid\": [{}]}]", "[{\"grid\": [{}, {}]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("llr-word-length", "[4]") + ", "
+                    + axis("back-off-db", "[2]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("llr-scale", "[4]") + "]}]",
+            "[{\"grid\": [" + axis("input-word-length", "[8]") + ", " + axis("input-fractional-bits", "[4]") + "]}]",
+            "[{\"grid\": [" + axis("llr-word-length", "[4]") + ", " + axis("llr-fractional-bits", "[1]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", scales(17, 0)) + ", " + axis("back-off-db", range(1, 16)) + "]}]",
+            "[{\"grid\": " + GRID + ", \"parameter\": \"llr-scale\"}]",
+            "[{\"grid\": " + GRID + ", \"x-extra\": 1}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", {\"grid\": " + GRID + "}]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("metric-word-length", "[64]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("scale-word-length", "[1]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("llr-word-length", "[4, 4]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", " + axis("llr-word-length", "[]") + "]}]",
+            "[{\"grid\": [" + axis("llr-scale", "[2]") + ", \"llr-word-length\"]}]",
+            "[" + String.join(", ", java.util.Collections.nCopies(9, "{\"grid\": " + GRID + "}")) + "]",
+            // the template's K format (UQ2.10) cannot hold K times 64: only the combination fails
+            "[{\"grid\": [" + axis("llr-scale", "[1, 64]") + ", " + axis("llr-word-length", "[3, 4]") + "]}]");
+
+    private static String axis(String parameter, String values) {
+        return "{\"parameter\": \"" + parameter + "\", \"values\": " + values + "}";
+    }
 
     /** Values a word-length or scale sweep must refuse. */
     static final List<String> HOSTILE_SWEEP_VALUES = List.of("0", "-1", "1", "1000", "2147483648", "1e308", "-1e308",
             "1e400", "2.5", "\"x\"", "null", "true", "[]", "{}", "64", "NaN");
 
     static final List<String> SWEPT = List.of("input-word-length", "input-fractional-bits", "llr-word-length",
-            "llr-fractional-bits", "llr-scale", "back-off-db");
+            "llr-fractional-bits", "llr-scale", "back-off-db", "metric-word-length", "scale-constant-word-length",
+            "scale-word-length");
 
     /**
      * Simulations of hours or more: huge max-bits, whole-chunk rounding of a huge chunk over many points, or many
@@ -105,7 +137,12 @@ class LossSpecHardeningProperties {
             "\"simulation\": {\"max-bits\": 10000000},"
                     + " \"noise\": {\"eb-n0-db\": " + range(-20, 43) + "},"
                     + " \"sweep\": [{\"parameter\": \"llr-scale\", \"values\": " + scales(32, 0) + "},"
-                    + " {\"parameter\": \"back-off-db\", \"values\": " + range(1, 32) + "}]");
+                    + " {\"parameter\": \"back-off-db\", \"values\": " + range(1, 32) + "}]",
+            // a grid's 256 combinations count: 257 designs x 64 levels x about 10^6 bits
+            "\"simulation\": {\"max-bits\": 1000000},"
+                    + " \"noise\": {\"eb-n0-db\": " + range(-20, 43) + "},"
+                    + " \"sweep\": [{\"grid\": [{\"parameter\": \"llr-scale\", \"values\": " + scales(16, 0) + "},"
+                    + " {\"parameter\": \"back-off-db\", \"values\": " + range(1, 16) + "}]}]");
 
     @Property(tries = 1)
     void theTemplateIsValid() {
@@ -168,12 +205,12 @@ class LossSpecHardeningProperties {
                 + Harness.nestedArrays(depth) + "}").getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 20)
+    @Property(tries = 45)
     void hostileSweepsAreRejected(@ForAll("hostileSweep") String sweep) {
         check("loss-spec hostile sweeps", replaceSweep(sweep).getBytes(StandardCharsets.UTF_8));
     }
 
-    @Property(tries = 30)
+    @Property(tries = 60)
     void hostileSweepValuesAreRejected(@ForAll("swept") String parameter, @ForAll("hostileSweepValue") String value) {
         // 64, 1000, 2^31 and 1 are legal (if useless) LLR scales and back-offs in dB: every code saturates
         Assume.that(!((parameter.equals("llr-scale") || parameter.equals("back-off-db"))
