@@ -266,6 +266,30 @@ class LossCommandTest {
         // The README's reading of the example report must stay true.
         assertTrue(md.contains("### llr-word-length: choose 5"), md);
         assertTrue(md.contains("### input-word-length: choose 6"), md);
+        // ... and its reading of the grid: 6 + 5 bits together within the budget at about 0.05 dB, 5 + 5 and 6 + 4 not.
+        assertTrue(md.contains("### grid input-word-length × llr-word-length: choose input-word-length = 6,"
+                + " llr-word-length = 5"), md);
+        String sizing = Files.readString(report.resolve("sizing.csv"));
+        assertTrue(sizing.contains("\ngrid,input-word-length,5,llr-word-length,5,") && sizing.contains(
+                "\ngrid,input-word-length,6,llr-word-length,4,"), sizing);
+        for (String line : sizing.split("\n")) {
+            if (line.startsWith("grid,input-word-length,5,llr-word-length,5,")
+                    || line.startsWith("grid,input-word-length,6,llr-word-length,4,")) {
+                assertTrue(line.endsWith(",false,false"), line);
+            }
+            if (line.startsWith("grid,input-word-length,6,llr-word-length,5,")) {
+                double gmiLoss = Double.parseDouble(line.split(",")[8]);
+                assertTrue(line.endsWith(",true,true") && gmiLoss > 0.03 && gmiLoss < 0.07, line);
+            }
+        }
+        // The section's JSON examples are specifications the reader accepts.
+        int blocks = 0;
+        for (int at = section.indexOf("```json\n"); at >= 0; at = section.indexOf("```json\n", at + 1)) {
+            String json = section.substring(at + 8, section.indexOf("```", at + 8));
+            dev.fixmod.verify.loss.LossSpecReader.parse(json, "README.md");
+            blocks++;
+        }
+        assertEquals(1, blocks, "the loss section's JSON example");
         assertTrue(Files.readString(report.resolve("report.html")).contains("<svg"));
     }
 }
