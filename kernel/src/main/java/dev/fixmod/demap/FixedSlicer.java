@@ -108,11 +108,7 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
      * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
      */
     public final int slice(int i, int q, long symbolIndex) {
-        if (i < input.minCode() || i > input.maxCode() || q < input.minCode() || q > input.maxCode()) {
-            throw new IllegalArgumentException("sample (" + i + ", " + q + ") is outside " + input + " (codes "
-                    + input.minCode() + " .. " + input.maxCode() + ")");
-        }
-        ArrayRegions.requireSymbolIndex(symbolIndex);
+        requireSample(i, q, symbolIndex);
         return decide(i, q, alternates && (symbolIndex & 1) != 0);
     }
 
@@ -138,12 +134,16 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
      * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
      */
     public final boolean onBoundary(int i, int q, long symbolIndex) {
+        requireSample(i, q, symbolIndex);
+        return onBoundary(i, q, alternates && (symbolIndex & 1) != 0);
+    }
+
+    private void requireSample(int i, int q, long symbolIndex) {
         if (i < input.minCode() || i > input.maxCode() || q < input.minCode() || q > input.maxCode()) {
             throw new IllegalArgumentException("sample (" + i + ", " + q + ") is outside " + input + " (codes "
                     + input.minCode() + " .. " + input.maxCode() + ")");
         }
         ArrayRegions.requireSymbolIndex(symbolIndex);
-        return onBoundary(i, q, alternates && (symbolIndex & 1) != 0);
     }
 
     /**

@@ -34,6 +34,9 @@ import java.util.concurrent.Future;
  * stage (its overflow events are the input clips) and runs the fixed datapath. Hard decisions are the LLR signs; a
  * zero LLR decides 0 (the sign convention's side for "0"), in float and fixed alike. A symbol is in error when any of
  * its bits is.
+ *
+ * <p>Symbol s of chunk c has stream index c·chunkSymbols + s: π/2-BPSK sends the odd ones turned by +90° (the float
+ * points and the transmit ROM's odd codes) and both demappers are told each symbol's index.
  */
 public final class Simulation {
 
@@ -117,6 +120,7 @@ public final class Simulation {
         final double n0;
         final int snr;
         final boolean flat;
+        final boolean turns;
         final QFormat outFormat;
 
         Point(Design design, ConstellationRom tx, ConstellationRom rx, FixedLlrSpec llrSpec, double n0, int snr) {
@@ -131,7 +135,9 @@ public final class Simulation {
             for (int label = 0; label < c.size(); label++) {
                 f &= c.im(label) == 0.0;
             }
-            this.flat = f;
+            this.turns = c.alternatesQuarterTurn();
+            // π/2-BPSK's odd symbols leave the I axis even when the even ones lie on it.
+            this.flat = f && !turns;
             this.outFormat = llrSpec.output().format();
         }
 
@@ -163,14 +169,15 @@ public final class Simulation {
                 for (int b = 0; b < k; b++) {
                     bits[s * k + b] = (byte) ((label >>> (k - 1 - b)) & 1);
                 }
-                re[s] = c.re(label) + ni[s];
-                im[s] = c.im(label) + nq[s];
-                double xi = gain * (txf.toDouble(tx.iCode(label)) + ni[s]);
+                boolean odd = turns && ((first + s) & 1) != 0;
+                re[s] = (odd ? -c.im(label) + 0.0 : c.re(label)) + ni[s];
+                im[s] = (odd ? c.re(label) : c.im(label)) + nq[s];
+                double xi = gain * (txf.toDouble(odd ? tx.oddICode(label) : tx.iCode(label)) + ni[s]);
                 ci[s] = (int) input.quantize(xi, clips);
                 double ei = in.toDouble(ci[s]) - xi;
                 error += ei * ei;
                 if (!flat) {
-                    double xq = gain * (txf.toDouble(tx.qCode(label)) + nq[s]);
+                    double xq = gain * (txf.toDouble(odd ? tx.oddQCode(label) : tx.qCode(label)) + nq[s]);
                     cq[s] = (int) input.quantize(xq, clips);
                     double eq = in.toDouble(cq[s]) - xq;
                     error += eq * eq;
@@ -179,9 +186,9 @@ public final class Simulation {
             double[] llrF = new double[n * k];
             int[] llrC = new int[n * k];
             SoftDemapper reference = design.floatDemapper(n0);
-            reference.llr(re, flat ? null : im, 0, n, llrF, 0);
+            reference.llr(re, flat ? null : im, 0, n, first, llrF, 0);
             FixedSoftDemapper datapath = design.fixedDemapper(rx, llrSpec, n0);
-            datapath.llr(ci, flat ? null : cq, 0, n, llrC, 0);
+            datapath.llr(ci, flat ? null : cq, 0, n, first, llrC, 0);
 
             Accumulator a = new Accumulator(this);
             a.symbols = n;
