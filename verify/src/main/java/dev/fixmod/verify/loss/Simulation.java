@@ -59,32 +59,36 @@ public final class Simulation {
 
     /** Simulates design {@code d} (index {@code designIndex} of the run) at grid point {@code snr}. */
     public PointResult run(Design d, int designIndex, int snr) {
-        Constellation c = d.constellation();
-        double[] grid = spec.ebN0Db().stream().mapToDouble(Double::doubleValue).toArray();
-        double n0 = n0(c, grid[snr], spec.codeRate());
-        ConstellationRom tx = d.transmitRom();
-        ConstellationRom rx = d.receiveRom();
-        FixedLlrSpec llrSpec = d.llrSpec(rx, n0(c, grid[grid.length - 1], spec.codeRate()));
-        Point point = new Point(d, tx, rx, llrSpec, n0, snr);
+        Point point = new Point(spec, d, snr);
         LossSpec.Simulation rule = spec.simulation();
-        int k = c.bitsPerSymbol();
+        int k = d.constellation().bitsPerSymbol();
         long chunkBits = (long) rule.chunkSymbols() * k;
         long maxChunks = (rule.maxBits() + chunkBits - 1) / chunkBits;
         Accumulator total = new Accumulator(point);
+        // One worker per chunk in flight, each with its own demappers and scratch; a worker is reused only after
+        // its chunk was merged, since the whole batch is merged before the next one is submitted.
+        Worker[] workers = new Worker[(int) Math.min(parallel, maxChunks)];
         long next = 0;
         boolean stop = false;
         while (!stop) {
-            List<Future<Accumulator>> batch = new ArrayList<>();
-            for (int i = 0; i < parallel && next < maxChunks; i++, next++) {
+            List<Future<Worker>> batch = new ArrayList<>();
+            for (int i = 0; i < workers.length && next < maxChunks; i++, next++) {
+                if (workers[i] == null) {
+                    workers[i] = new Worker(point);
+                }
+                Worker w = workers[i];
                 long chunk = next;
-                batch.add(pool.submit(() -> point.chunk(chunk)));
+                batch.add(pool.submit(() -> {
+                    w.run(chunk);
+                    return w;
+                }));
             }
-            for (Future<Accumulator> f : batch) {
+            for (Future<Worker> f : batch) {
                 if (stop) {
                     f.cancel(false);
                     continue;
                 }
-                total.merge(get(f));
+                total.merge(get(f).chunk);
                 long bits = total.symbols * k;
                 stop = bits >= rule.maxBits() || (bits >= rule.minBits()
                         && total.floatBitErrors >= rule.targetErrors() && total.fixedBitErrors >= rule.targetErrors());
@@ -94,7 +98,15 @@ public final class Simulation {
         return total.result(designIndex, snr);
     }
 
-    private static Accumulator get(Future<Accumulator> f) {
+    /**
+     * A worker for the chunks of design {@code d} at grid point {@code snr} of {@code spec}: what {@link #run} uses
+     * for every chunk, for callers that run chunks themselves (the benchmarks).
+     */
+    public static Worker worker(LossSpec spec, Design d, int snr) {
+        return new Worker(new Point(spec, d, snr));
+    }
+
+    private static <T> T get(Future<T> f) {
         try {
             return f.get();
         } catch (InterruptedException e) {
@@ -108,55 +120,115 @@ public final class Simulation {
         }
     }
 
-    /** Everything a chunk needs; immutable, shared by the workers (each builds its own demappers). */
-    private final class Point {
+    /** Everything the chunks of one point share; immutable, read by every worker. */
+    private static final class Point {
+        final LossSpec spec;
         final Design design;
-        final ConstellationRom tx;
         final ConstellationRom rx;
         final FixedLlrSpec llrSpec;
         final double n0;
         final int snr;
         final boolean flat;
         final QFormat outFormat;
+        /** The transmit ROM's points by label, in real units. */
+        final double[] txRe;
+        final double[] txIm;
 
-        Point(Design design, ConstellationRom tx, ConstellationRom rx, FixedLlrSpec llrSpec, double n0, int snr) {
+        Point(LossSpec spec, Design design, int snr) {
+            this.spec = spec;
             this.design = design;
-            this.tx = tx;
-            this.rx = rx;
-            this.llrSpec = llrSpec;
-            this.n0 = n0;
             this.snr = snr;
             Constellation c = design.constellation();
+            double[] grid = spec.ebN0Db().stream().mapToDouble(Double::doubleValue).toArray();
+            this.n0 = n0(c, grid[snr], spec.codeRate());
+            ConstellationRom tx = design.transmitRom();
+            this.rx = design.receiveRom();
+            this.llrSpec = design.llrSpec(rx, n0(c, grid[grid.length - 1], spec.codeRate()));
             boolean f = true;
             for (int label = 0; label < c.size(); label++) {
                 f &= c.im(label) == 0.0;
             }
             this.flat = f;
             this.outFormat = llrSpec.output().format();
+            QFormat txf = tx.format();
+            this.txRe = new double[c.size()];
+            this.txIm = new double[c.size()];
+            for (int label = 0; label < c.size(); label++) {
+                txRe[label] = txf.toDouble(tx.iCode(label));
+                txIm[label] = txf.toDouble(tx.qCode(label));
+            }
+        }
+    }
+
+    /**
+     * Runs chunks of one point: chunk c holds symbols c·chunkSymbols … (c+1)·chunkSymbols − 1 (see the class
+     * comment). Holds its own demappers and scratch, built once, so a chunk allocates nothing; not thread-safe (one
+     * worker per thread). The counts of the last chunk run are read from the accessors.
+     */
+    public static final class Worker {
+        private final Point point;
+        private final Constellation c;
+        private final int n;
+        private final int k;
+        private final int mask;
+        private final StreamKey labelKey;
+        private final StreamKey noiseKey;
+        private final Awgn awgn;
+        private final SoftDemapper reference;
+        private final FixedSoftDemapper datapath;
+        private final Quantizer input;
+        private final double gain;
+        private final OverflowCounter clips = new OverflowCounter("input");
+        private final int[] words;
+        private final double[] ni;
+        private final double[] nq;
+        private final byte[] bits;
+        private final double[] re;
+        private final double[] im;
+        private final int[] ci;
+        private final int[] cq;
+        private final double[] llrF;
+        private final int[] llrC;
+        private final Accumulator chunk;
+
+        private Worker(Point point) {
+            this.point = point;
+            Design d = point.design;
+            this.c = d.constellation();
+            this.n = point.spec.simulation().chunkSymbols();
+            this.k = c.bitsPerSymbol();
+            this.mask = c.size() - 1;
+            long seed = point.spec.seed();
+            this.labelKey = StreamKey.of(seed, 2L * point.snr + 1);
+            this.noiseKey = StreamKey.of(seed, 2L * point.snr);
+            this.awgn = new Awgn(point.n0, Gaussian.fromName(point.spec.gaussian()));
+            this.reference = d.floatDemapper(point.n0);
+            this.datapath = d.fixedDemapper(point.rx, point.llrSpec, point.n0);
+            this.input = d.inputQuantizer();
+            this.gain = d.gain();
+            this.words = new int[n];
+            this.ni = new double[n];
+            this.nq = new double[n];
+            this.bits = new byte[n * k];
+            this.re = new double[n];
+            this.im = new double[n];
+            this.ci = new int[n];
+            this.cq = new int[n];
+            this.llrF = new double[n * k];
+            this.llrC = new int[n * k];
+            this.chunk = new Accumulator(point);
         }
 
-        Accumulator chunk(long index) {
-            Constellation c = design.constellation();
-            int n = spec.simulation().chunkSymbols();
-            int k = c.bitsPerSymbol();
-            int mask = c.size() - 1;
+        /** Runs chunk {@code index}, replacing the counts of the previous one. */
+        public void run(long index) {
             long first = index * n;
-            int[] words = new int[n];
-            Philox4x32.fillWords(words, 0, n, StreamKey.of(spec.seed(), 2L * snr + 1), first);
-            double[] ni = new double[n];
-            double[] nq = new double[n];
-            new Awgn(n0, Gaussian.fromName(spec.gaussian())).fill(ni, 0, nq, 0, n, StreamKey.of(spec.seed(), 2L * snr),
-                    first);
-            byte[] bits = new byte[n * k];
-            double[] re = new double[n];
-            double[] im = new double[n];
-            int[] ci = new int[n];
-            int[] cq = new int[n];
-            double gain = design.gain();
-            Quantizer input = design.inputQuantizer();
+            Philox4x32.fillWords(words, 0, n, labelKey, first);
+            awgn.fill(ni, 0, nq, 0, n, noiseKey, first);
+            boolean flat = point.flat;
+            double[] txRe = point.txRe;
+            double[] txIm = point.txIm;
             QFormat in = input.format();
-            QFormat txf = tx.format();
-            OverflowCounter clips = new OverflowCounter("input");
+            clips.reset();
             double error = 0;
             for (int s = 0; s < n; s++) {
                 int label = words[s] & mask;
@@ -165,25 +237,23 @@ public final class Simulation {
                 }
                 re[s] = c.re(label) + ni[s];
                 im[s] = c.im(label) + nq[s];
-                double xi = gain * (txf.toDouble(tx.iCode(label)) + ni[s]);
+                double xi = gain * (txRe[label] + ni[s]);
                 ci[s] = (int) input.quantize(xi, clips);
                 double ei = in.toDouble(ci[s]) - xi;
                 error += ei * ei;
                 if (!flat) {
-                    double xq = gain * (txf.toDouble(tx.qCode(label)) + nq[s]);
+                    double xq = gain * (txIm[label] + nq[s]);
                     cq[s] = (int) input.quantize(xq, clips);
                     double eq = in.toDouble(cq[s]) - xq;
                     error += eq * eq;
                 }
             }
-            double[] llrF = new double[n * k];
-            int[] llrC = new int[n * k];
-            SoftDemapper reference = design.floatDemapper(n0);
             reference.llr(re, flat ? null : im, 0, n, llrF, 0);
-            FixedSoftDemapper datapath = design.fixedDemapper(rx, llrSpec, n0);
+            datapath.resetCounters();
             datapath.llr(ci, flat ? null : cq, 0, n, llrC, 0);
 
-            Accumulator a = new Accumulator(this);
+            Accumulator a = chunk;
+            a.reset();
             a.symbols = n;
             for (int s = 0; s < n; s++) {
                 boolean floatWrong = false;
@@ -212,7 +282,29 @@ public final class Simulation {
             a.metricEvents = counters.get(0).events();
             a.scaleEvents = counters.get(1).events();
             a.outputEvents = counters.get(2).events();
-            return a;
+        }
+
+        /** The symbols of the last chunk. */
+        public long symbols() {
+            return chunk.symbols;
+        }
+
+        /** The bit errors of the float reference in the last chunk. */
+        public long floatBitErrors() {
+            return chunk.floatBitErrors;
+        }
+
+        /** The bit errors of the fixed datapath in the last chunk. */
+        public long fixedBitErrors() {
+            return chunk.fixedBitErrors;
+        }
+
+        /**
+         * The last chunk as a point result ({@code design} and {@code snr} are labels only); allocates: not for
+         * inner loops.
+         */
+        public PointResult result(int design, int snr) {
+            return chunk.result(design, snr);
         }
     }
 
@@ -238,6 +330,23 @@ public final class Simulation {
             int k = point.design.constellation().bitsPerSymbol();
             this.gmi = new GmiEstimator(k);
             this.histogram = new LlrHistogram(k, (int) point.outFormat.minCode(), (int) point.outFormat.maxCode());
+        }
+
+        /** Back to no samples, as built. */
+        void reset() {
+            symbols = 0;
+            floatBitErrors = 0;
+            floatSymbolErrors = 0;
+            fixedBitErrors = 0;
+            fixedSymbolErrors = 0;
+            gmi.reset();
+            histogram.reset();
+            inputErrorEnergy = 0;
+            inputSamples = 0;
+            inputClips = 0;
+            metricEvents = 0;
+            scaleEvents = 0;
+            outputEvents = 0;
         }
 
         void merge(Accumulator o) {
