@@ -255,24 +255,29 @@ public final class Simulation {
             Accumulator a = chunk;
             a.reset();
             a.symbols = n;
+            long floatBitErrors = 0;
+            long fixedBitErrors = 0;
+            long floatSymbolErrors = 0;
+            long fixedSymbolErrors = 0;
             for (int s = 0; s < n; s++) {
-                boolean floatWrong = false;
-                boolean fixedWrong = false;
+                // Counted without branches: an error is as unpredictable as the noise.
+                int floatWrong = 0;
+                int fixedWrong = 0;
                 for (int b = 0; b < k; b++) {
                     int i = s * k + b;
                     int bit = bits[i];
-                    if ((llrF[i] < 0 ? 1 : 0) != bit) {
-                        a.floatBitErrors++;
-                        floatWrong = true;
-                    }
-                    if ((llrC[i] < 0 ? 1 : 0) != bit) {
-                        a.fixedBitErrors++;
-                        fixedWrong = true;
-                    }
+                    floatWrong += (llrF[i] < 0 ? 1 : 0) ^ bit;
+                    fixedWrong += (llrC[i] >>> 31) ^ bit;
                 }
-                a.floatSymbolErrors += floatWrong ? 1 : 0;
-                a.fixedSymbolErrors += fixedWrong ? 1 : 0;
+                floatBitErrors += floatWrong;
+                fixedBitErrors += fixedWrong;
+                floatSymbolErrors += (-floatWrong) >>> 31;
+                fixedSymbolErrors += (-fixedWrong) >>> 31;
             }
+            a.floatBitErrors = floatBitErrors;
+            a.fixedBitErrors = fixedBitErrors;
+            a.floatSymbolErrors = floatSymbolErrors;
+            a.fixedSymbolErrors = fixedSymbolErrors;
             a.gmi.add(llrF, 0, bits, 0, n * k);
             a.histogram.add(llrC, 0, bits, 0, n * k);
             a.inputErrorEnergy = error;
