@@ -1,6 +1,6 @@
 // Testbench: reads the demapper stimulus with $readmemh (24-bit {I, Q} words of the set's demapper-in.hex) and the
-// scale constants K per noise level (+scale: line 0 for the vectors without noise, line l + 1 for noise level l),
-// drives one sample per clock and writes the LLR port every clock with $fwrite (one %h word per line, the set's
+// scale constants K per noise level (+scale: the set's llr-scale.hex, line 0 for the vectors without noise, line
+// l + 1 for noise level l), drives one sample per clock and writes the LLR port every clock with $fwrite (one %h word per line, the set's
 // llr layout) from the first stimulus cycle on, plus a few flush cycles. The bundled design's latency is therefore
 // 3 words. Vector n belongs to noise level n / per_level when n < levels * per_level (the set's manifest: groups,
 // demapper, data-per-level and levels); the rest has no noise.

@@ -20,6 +20,10 @@ import java.util.Objects;
  *
  * <p>All methods take arrays with offsets and counts, allocate nothing, and read their arguments in the order of
  * {@link System#arraycopy}: source, source offset, destination, destination offset, count.
+ *
+ * <p>The block methods check their input as they go. The per-sample loops of mappers and slicers check a whole
+ * region first ({@link #requireBits}, {@link #requireLabels}) and then convert one label at a time with the
+ * unchecked, integer-only {@link #bitsToLabel} and {@link #labelToBits}.
  */
 public final class BitPacking {
 
@@ -160,8 +164,57 @@ public final class BitPacking {
                 throw new IllegalArgumentException("labels[" + (labelOffset + j) + "] = " + label + " does not fit "
                         + bitsPerLabel + " bits (0.." + ((1L << bitsPerLabel) - 1) + ")");
             }
-            for (int i = bitsPerLabel - 1; i >= 0; i--) {
-                bits[b++] = (byte) (label >>> i & 1);
+            labelToBits(label, bits, b, bitsPerLabel);
+            b += bitsPerLabel;
+        }
+    }
+
+    /**
+     * The label of the {@code bitsPerLabel} bits from {@code bits[bitOffset]}, the first of them its most significant
+     * bit. Unchecked: the caller has checked the region, e.g. with {@link #requireBits}.
+     */
+    public static int bitsToLabel(byte[] bits, int bitOffset, int bitsPerLabel) {
+        int label = 0;
+        for (int j = 0; j < bitsPerLabel; j++) {
+            label = (label << 1) | bits[bitOffset + j];
+        }
+        return label;
+    }
+
+    /**
+     * Writes the {@code bitsPerLabel} bits of {@code label} from {@code bits[bitOffset]}, most significant first.
+     * Unchecked: the caller has checked that the label fits and the region lies within {@code bits}.
+     */
+    public static void labelToBits(int label, byte[] bits, int bitOffset, int bitsPerLabel) {
+        for (int j = 0; j < bitsPerLabel; j++) {
+            bits[bitOffset + j] = (byte) ((label >>> (bitsPerLabel - 1 - j)) & 1);
+        }
+    }
+
+    /**
+     * Requires every label of the region to lie in {@code 0..m−1}, the labels of an {@code m}-point constellation.
+     *
+     * @throws IllegalArgumentException naming the first bad index and value
+     */
+    public static void requireLabels(int[] labels, int offset, int count, int m) {
+        for (int n = offset; n < offset + count; n++) {
+            if (labels[n] < 0 || labels[n] >= m) {
+                throw new IllegalArgumentException("label " + labels[n] + " at index " + n + " is outside 0.." + (m - 1)
+                        + " of a " + m + "-point constellation");
+            }
+        }
+    }
+
+    /**
+     * Requires every bit of the region to be 0 or 1.
+     *
+     * @throws IllegalArgumentException naming the first bad index and value
+     */
+    public static void requireBits(byte[] bits, int offset, int count) {
+        for (int n = offset; n < offset + count; n++) {
+            if (bits[n] != 0 && bits[n] != 1) {
+                throw new IllegalArgumentException("bit at index " + n + " is " + bits[n]
+                        + "; unpacked bits are one byte each, 0 or 1");
             }
         }
     }

@@ -83,9 +83,7 @@ public final class FixedNearestSlicer extends FixedSlicer {
         int best = 0;
         long bestDistance = Long.MAX_VALUE;
         for (int n = 0; n < x.length; n++) {
-            long di = (long) i - x[n];
-            long dq = (long) q - y[n];
-            long d = di * di + dq * dq;
+            long d = squaredDistance(i, q, x[n], y[n]);
             if (d < bestDistance) {
                 bestDistance = d;
                 best = n;
@@ -101,9 +99,7 @@ public final class FixedNearestSlicer extends FixedSlicer {
         long bestDistance = Long.MAX_VALUE;
         int atBest = 0;
         for (int n = 0; n < x.length; n++) {
-            long di = (long) i - x[n];
-            long dq = (long) q - y[n];
-            long d = di * di + dq * dq;
+            long d = squaredDistance(i, q, x[n], y[n]);
             if (d < bestDistance) {
                 bestDistance = d;
                 atBest = 1;
@@ -112,5 +108,11 @@ public final class FixedNearestSlicer extends FixedSlicer {
             }
         }
         return atBest > 1;
+    }
+
+    private static long squaredDistance(int i, int q, int pointI, int pointQ) {
+        long di = (long) i - pointI;
+        long dq = (long) q - pointQ;
+        return di * di + dq * dq;
     }
 }

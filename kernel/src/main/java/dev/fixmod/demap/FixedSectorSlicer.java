@@ -89,9 +89,60 @@ public final class FixedSectorSlicer extends FixedSlicer {
     /**
      * The quantized normal {@code {a, b}} of line j (0 ≤ j < M/2) before its orientation toward +I, codes of the
      * coefficient format (a copy).
+     *
+     * @throws IllegalArgumentException if there is no line j
      */
     public long[] lineCodes(int line) {
-        return lines[line].clone();
+        return checkedLine(line).clone();
+    }
+
+    /**
+     * The normal {@code {a, b}} of line j (0 ≤ j < M/2) exactly as this slicer's sign tests use it for even symbols:
+     * {@link #lineCodes} negated if needed to point toward +I, or toward +Q on a horizontal line (a = 0). Then
+     * {@code a·I + b·Q >= 0} holds exactly when the sample is on the line or on its larger-I (larger-Q) side, which
+     * is the tie rule; codes of the coefficient format (a copy). With these M/2 tests a decision needs no search
+     * tree: the sector of a sample is the one whose interior gives the same M/2 test results (π/2-BPSK's odd symbols
+     * test {@code (−b, a)} of {@link #lineCodes}, oriented the same way).
+     *
+     * <table class="striped">
+     *   <caption>Examples (default coefficients Q1.14: ±1 is ±16384; tan 22.5° = 0.41421… is 6786)</caption>
+     *   <thead><tr><th>constellation</th><th>line j: boundary rays</th><th>lineCodes</th><th>orientedLineCodes</th>
+     *   <th>a sample on the line goes to</th></tr></thead>
+     *   <tbody>
+     *     <tr><td>QPSK, points at 45° + n·90°</td><td>0: 90°, 270°</td><td>{−16384, 0}</td><td>{16384, 0}</td>
+     *         <td>I ≥ 0</td></tr>
+     *     <tr><td>QPSK</td><td>1: 180°, 0°</td><td>{0, −16384}</td><td>{0, 16384}</td><td>Q ≥ 0 (horizontal)</td></tr>
+     *     <tr><td>8-PSK, points at n·45°</td><td>0: 22.5°, 202.5°</td><td>{−6786, 16384}</td><td>{6786, −16384}</td>
+     *         <td>below the line, the side of +I</td></tr>
+     *     <tr><td>8-PSK</td><td>1: 67.5°, 247.5°</td><td>{−16384, 6786}</td><td>{16384, −6786}</td>
+     *         <td>the side of +I</td></tr>
+     *     <tr><td>8-PSK</td><td>2: 112.5°, 292.5°</td><td>{−16384, −6786}</td><td>{16384, 6786}</td>
+     *         <td>the side of +I</td></tr>
+     *     <tr><td>8-PSK</td><td>3: 157.5°, 337.5°</td><td>{−6786, −16384}</td><td>{6786, 16384}</td>
+     *         <td>above the line, the side of +I</td></tr>
+     *   </tbody>
+     * </table>
+     *
+     * @throws IllegalArgumentException if there is no line j
+     */
+    public long[] orientedLineCodes(int line) {
+        long[] normal = checkedLine(line);
+        long a = normal[0];
+        long b = normal[1];
+        return SectorTree.pointsTowardPlusI(a, b) ? new long[] {a, b} : new long[] {-a, -b};
+    }
+
+    /** The number of lines, M/2. */
+    public int lineCount() {
+        return lines.length;
+    }
+
+    private long[] checkedLine(int line) {
+        if (line < 0 || line >= lines.length) {
+            throw new IllegalArgumentException("line " + line + " does not exist; " + constellation().name()
+                    + " has lines 0 .. " + (lines.length - 1));
+        }
+        return lines[line];
     }
 
     /**

@@ -1,11 +1,11 @@
 package dev.fixmod.demap;
 
+import dev.fixmod.bits.BitPacking;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.map.ArrayRegions;
 import dev.fixmod.map.Codes;
 import dev.fixmod.map.DatapathCost;
-import dev.fixmod.map.Labels;
 
 /**
  * A hard-decision slicer on fixed-point I/Q codes: each sample becomes the label of the decided point (the label is
@@ -108,11 +108,7 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
      * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
      */
     public final int slice(int i, int q, long symbolIndex) {
-        if (i < input.minCode() || i > input.maxCode() || q < input.minCode() || q > input.maxCode()) {
-            throw new IllegalArgumentException("sample (" + i + ", " + q + ") is outside " + input + " (codes "
-                    + input.minCode() + " .. " + input.maxCode() + ")");
-        }
-        ArrayRegions.requireSymbolIndex(symbolIndex);
+        requireSample(i, q, symbolIndex);
         return decide(i, q, alternates && (symbolIndex & 1) != 0);
     }
 
@@ -138,12 +134,16 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
      * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
      */
     public final boolean onBoundary(int i, int q, long symbolIndex) {
+        requireSample(i, q, symbolIndex);
+        return onBoundary(i, q, alternates && (symbolIndex & 1) != 0);
+    }
+
+    private void requireSample(int i, int q, long symbolIndex) {
         if (i < input.minCode() || i > input.maxCode() || q < input.minCode() || q > input.maxCode()) {
             throw new IllegalArgumentException("sample (" + i + ", " + q + ") is outside " + input + " (codes "
                     + input.minCode() + " .. " + input.maxCode() + ")");
         }
         ArrayRegions.requireSymbolIndex(symbolIndex);
-        return onBoundary(i, q, alternates && (symbolIndex & 1) != 0);
     }
 
     /**
@@ -174,7 +174,7 @@ public abstract sealed class FixedSlicer permits FixedAxisSlicer, FixedNearestSl
         ArrayRegions.require("bits", bits.length, bitOffset, (long) count * bitsPerSymbol);
         for (int n = 0; n < count; n++) {
             int label = decide(i[offset + n], q[offset + n], alternates && ((firstSymbol + n) & 1) != 0);
-            Labels.toBits(label, bitsPerSymbol, bits, bitOffset + n * bitsPerSymbol);
+            BitPacking.labelToBits(label, bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
         }
     }
 

@@ -1,8 +1,8 @@
 package dev.fixmod.demap;
 
+import dev.fixmod.bits.BitPacking;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.map.ArrayRegions;
-import dev.fixmod.map.Labels;
 
 /**
  * A hard-decision slicer on floating-point samples: the reference of each {@link FixedSlicer} method
@@ -74,7 +74,7 @@ public abstract sealed class FloatSlicer permits FloatAxisSlicer, FloatNearestSl
         ArrayRegions.require("bits", bits.length, bitOffset, (long) count * bitsPerSymbol);
         for (int n = 0; n < count; n++) {
             int label = decide(re[offset + n], im[offset + n], alternates && ((firstSymbol + n) & 1) != 0);
-            Labels.toBits(label, bitsPerSymbol, bits, bitOffset + n * bitsPerSymbol);
+            BitPacking.labelToBits(label, bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
         }
     }
 

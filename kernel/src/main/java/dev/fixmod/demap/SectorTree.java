@@ -50,6 +50,11 @@ final class SectorTree<T> {
         return new SectorTree<>(a, b, upper);
     }
 
+    /** Whether normal (a, b) points toward +I, or toward +Q when a = 0: the side that takes a sample on its line. */
+    static boolean pointsTowardPlusI(long a, long b) {
+        return a > 0 || (a == 0 && b > 0);
+    }
+
     /** A tree from the quantized left normals of the M/2 lines. */
     static SectorTree<long[]> ofCodes(int m, long[][] lines) {
         long[] a = new long[m];
@@ -60,7 +65,7 @@ final class SectorTree<T> {
             long sign = boundary < m / 2 ? 1 : -1;
             long na = sign * lines[boundary % (m / 2)][0];
             long nb = sign * lines[boundary % (m / 2)][1];
-            boolean towardPlusI = na > 0 || (na == 0 && nb > 0);
+            boolean towardPlusI = pointsTowardPlusI(na, nb);
             a[h] = towardPlusI ? na : -na;
             b[h] = towardPlusI ? nb : -nb;
             upper[h] = towardPlusI;

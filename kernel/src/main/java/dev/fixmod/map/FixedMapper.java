@@ -1,5 +1,6 @@
 package dev.fixmod.map;
 
+import dev.fixmod.bits.BitPacking;
 import dev.fixmod.fixed.QFormat;
 import java.util.Objects;
 
@@ -59,7 +60,7 @@ public final class FixedMapper {
         ArrayRegions.require("output I", outI.length, outOffset, count);
         ArrayRegions.require("output Q", outQ.length, outOffset, count);
         ArrayRegions.requireSymbolIndex(firstSymbol);
-        Labels.requireLabels(labels, labelOffset, count, evenI.length);
+        BitPacking.requireLabels(labels, labelOffset, count, evenI.length);
         for (int n = 0; n < count; n++) {
             int label = labels[labelOffset + n];
             boolean odd = ((firstSymbol + n) & 1) != 0;
@@ -80,9 +81,9 @@ public final class FixedMapper {
         ArrayRegions.require("output I", outI.length, outOffset, count);
         ArrayRegions.require("output Q", outQ.length, outOffset, count);
         ArrayRegions.requireSymbolIndex(firstSymbol);
-        Labels.requireBits(bits, bitOffset, count * bitsPerSymbol);
+        BitPacking.requireBits(bits, bitOffset, count * bitsPerSymbol);
         for (int n = 0; n < count; n++) {
-            int label = Labels.fromBits(bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
+            int label = BitPacking.bitsToLabel(bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
             boolean odd = ((firstSymbol + n) & 1) != 0;
             outI[outOffset + n] = odd ? oddI[label] : evenI[label];
             outQ[outOffset + n] = odd ? oddQ[label] : evenQ[label];

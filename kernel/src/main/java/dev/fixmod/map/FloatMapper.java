@@ -1,5 +1,6 @@
 package dev.fixmod.map;
 
+import dev.fixmod.bits.BitPacking;
 import dev.fixmod.constellation.Constellation;
 import java.util.Objects;
 
@@ -44,7 +45,7 @@ public final class FloatMapper {
         ArrayRegions.require("output re", outRe.length, outOffset, count);
         ArrayRegions.require("output im", outIm.length, outOffset, count);
         ArrayRegions.requireSymbolIndex(firstSymbol);
-        Labels.requireLabels(labels, labelOffset, count, re.length);
+        BitPacking.requireLabels(labels, labelOffset, count, re.length);
         for (int n = 0; n < count; n++) {
             int label = labels[labelOffset + n];
             put(label, alternates && ((firstSymbol + n) & 1) != 0, outRe, outIm, outOffset + n);
@@ -63,9 +64,9 @@ public final class FloatMapper {
         ArrayRegions.require("output re", outRe.length, outOffset, count);
         ArrayRegions.require("output im", outIm.length, outOffset, count);
         ArrayRegions.requireSymbolIndex(firstSymbol);
-        Labels.requireBits(bits, bitOffset, count * bitsPerSymbol);
+        BitPacking.requireBits(bits, bitOffset, count * bitsPerSymbol);
         for (int n = 0; n < count; n++) {
-            int label = Labels.fromBits(bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
+            int label = BitPacking.bitsToLabel(bits, bitOffset + n * bitsPerSymbol, bitsPerSymbol);
             put(label, alternates && ((firstSymbol + n) & 1) != 0, outRe, outIm, outOffset + n);
         }
     }

@@ -54,6 +54,7 @@ class BitPackingProperties {
         }
         for (int j = 0; j < count; j++) {
             assertEquals(Integer.parseInt(s.substring(j * k, j * k + k), 2), labels[j], "label " + j);
+            assertEquals(labels[j], BitPacking.bitsToLabel(bits, j * k, k), "single label " + j);
         }
         byte[] back = new byte[count * k];
         BitPacking.labelsToBits(labels, 0, back, 0, count, k);

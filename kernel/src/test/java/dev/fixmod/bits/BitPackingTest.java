@@ -36,6 +36,26 @@ class BitPackingTest {
         int[] wide = new int[1];
         BitPacking.bitsToLabels(new byte[] {1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 1}, 0, wide, 0, 1, 16);
         assertEquals(0x8001, wide[0]);
+        assertEquals(5, BitPacking.bitsToLabel(bits, 0, 3));
+        assertEquals(3, BitPacking.bitsToLabel(bits, 3, 3));
+        byte[] one = {7, 7, 7, 7, 7};
+        BitPacking.labelToBits(6, one, 1, 3);
+        assertArrayEquals(new byte[] {7, 1, 1, 0, 7}, one); // offset honoured, the rest untouched
+    }
+
+    @Test
+    void regionChecksNameTheFirstBadIndex() {
+        BitPacking.requireBits(new byte[] {0, 1, 1, 0}, 0, 4);
+        BitPacking.requireLabels(new int[] {0, 3, 2}, 0, 3, 4);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> BitPacking.requireBits(new byte[] {0, 1, 2, -1}, 1, 3));
+        assertEquals("bit at index 2 is 2; unpacked bits are one byte each, 0 or 1", e.getMessage());
+        e = assertThrows(IllegalArgumentException.class,
+                () -> BitPacking.requireLabels(new int[] {9, 0, -1, 4}, 1, 3, 4));
+        assertEquals("label -1 at index 2 is outside 0..3 of a 4-point constellation", e.getMessage());
+        // Outside the region nothing is looked at.
+        BitPacking.requireBits(new byte[] {5, 0, 1, 5}, 1, 2);
+        BitPacking.requireLabels(new int[] {9, 0, 1, 9}, 1, 2, 2);
     }
 
     @Test

@@ -23,9 +23,9 @@ class IntegerOnlyPathTest {
     @Test
     void fixedSlicers() {
         IntegerOnlyBytecode.assertIntegerOnly(FixedSlicer.class, "slice", "sliceLabels", "sliceBits");
-        IntegerOnlyBytecode.assertIntegerOnly(FixedAxisSlicer.class, "decide");
-        IntegerOnlyBytecode.assertIntegerOnly(FixedSectorSlicer.class, "decide");
-        IntegerOnlyBytecode.assertIntegerOnly(FixedNearestSlicer.class, "decide");
+        IntegerOnlyBytecode.assertIntegerOnly(FixedAxisSlicer.class, "decide", "onBoundary");
+        IntegerOnlyBytecode.assertIntegerOnly(FixedSectorSlicer.class, "decide", "onBoundary");
+        IntegerOnlyBytecode.assertIntegerOnly(FixedNearestSlicer.class, "decide", "onBoundary");
     }
 
     @Test

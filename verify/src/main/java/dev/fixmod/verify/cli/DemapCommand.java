@@ -13,7 +13,6 @@ import dev.fixmod.demap.FixedLlrSpec;
 import dev.fixmod.demap.FixedLlrTrace;
 import dev.fixmod.demap.FixedSoftDemapper;
 import dev.fixmod.demap.LlrOptions;
-import dev.fixmod.demap.LlrScaling;
 import dev.fixmod.demap.LlrSign;
 import dev.fixmod.demap.Slicers;
 import dev.fixmod.demap.SoftAlgorithm;
@@ -31,6 +30,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -117,27 +117,8 @@ public final class DemapCommand implements Callable<Integer> {
     @Option(names = "--no-priors", description = "Ignore the constellation's symbol probabilities.")
     boolean noPriors;
 
-    @Option(names = "--llr", paramLabel = "STAGE", defaultValue = "Q4.1,half-even,symmetric-saturate",
-            description = "Fixed LLR output stage, as the specs' \"llr\" key (default: ${DEFAULT-VALUE}).")
-    String llrStage;
-
-    @Option(names = "--metric", paramLabel = "STAGE", description = "Metric stage, e.g. Q6.12,half-even,saturate.")
-    String metric;
-
-    @Option(names = "--scale-constant", paramLabel = "QFORMAT",
-            description = "Format of the scale constant K (1/N0 or 4A/N0), e.g. UQ4.12.")
-    String scaleConstant;
-
-    @Option(names = "--scale", paramLabel = "STAGE", description = "Product stage metric x K, e.g. Q7.5,floor,saturate.")
-    String scale;
-
-    @Option(names = "--scaling", paramLabel = "MODE", defaultValue = "noise-scaled",
-            description = "noise-scaled (output in nats) or unscaled (output = metric) (default: ${DEFAULT-VALUE}).")
-    String scaling;
-
-    @Option(names = "--constant-rounding", paramLabel = "ROUNDING", defaultValue = "half-even",
-            description = "How K and the fold constants are quantized (default: ${DEFAULT-VALUE}).")
-    String constantRounding;
+    @Mixin
+    LlrStageOptions stages;
 
     @Option(names = "--json", description = "Print the report as JSON.")
     boolean json;
@@ -216,7 +197,7 @@ public final class DemapCommand implements Callable<Integer> {
             }
             r.floats.add(row);
         }
-        Quantizer out = stage("--llr", llrStage);
+        Quantizer out = stages.output();
         for (SoftAlgorithm a : FIXED_ALGORITHMS) {
             FixedRow row = new FixedRow(a);
             FixedLlrSpec fixedSpec;
@@ -227,7 +208,7 @@ public final class DemapCommand implements Callable<Integer> {
                 r.fixeds.add(row);
                 continue;
             }
-            fixedSpec = override(fixedSpec, out);
+            fixedSpec = stages.over(fixedSpec);
             try {
                 FixedSoftDemapper d = FixedSoftDemapper.create(a, rom, llr, fixedSpec);
                 row.datapath = d;
@@ -250,21 +231,6 @@ public final class DemapCommand implements Callable<Integer> {
         return r;
     }
 
-    /** The user's stage formats over the suggested ones; the spec's own validation reports inconsistencies. */
-    private FixedLlrSpec override(FixedLlrSpec base, Quantizer out) {
-        Rounding constants = Rounding.fromName(constantRounding);
-        Quantizer m = metric == null ? base.metric() : stage("--metric", metric);
-        if (LlrScaling.fromName(scaling) == LlrScaling.UNSCALED) {
-            if (scaleConstant != null || scale != null) {
-                throw new UsageException("--scale-constant and --scale apply to --scaling noise-scaled only");
-            }
-            return FixedLlrSpec.unscaled(constants, m, out);
-        }
-        QFormat k = scaleConstant == null ? base.scaleConstant() : QFormat.parse(scaleConstant);
-        Quantizer s = scale == null ? base.scale() : stage("--scale", scale);
-        return new FixedLlrSpec(constants, m, LlrScaling.NOISE_SCALED, k, s, out);
-    }
-
     /** The label from the LLR signs; a bit whose LLR is exactly 0 takes the slicer's decision. */
     private static int decision(double[] llr, int sliced, int k) {
         int label = 0;
@@ -273,14 +239,6 @@ public final class DemapCommand implements Callable<Integer> {
             label = (label << 1) | bit;
         }
         return label;
-    }
-
-    private static Quantizer stage(String option, String text) {
-        try {
-            return Quantizer.parse(text.replace(',', ' '));
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(option + ": " + e.getMessage());
-        }
     }
 
     /** A finite number, or a message naming the option and the text. */

@@ -108,7 +108,8 @@ public final class LossSpecReader {
         return new LossSpecReader(source, locate(text)).read(root);
     }
 
-    private static Map<String, JsonLocation> locate(String text) {
+    /** Where each JSON pointer's value starts in {@code text}, which must be valid JSON. */
+    static Map<String, JsonLocation> locate(String text) {
         Map<String, JsonLocation> map = new HashMap<>();
         try (JsonParser p = new JsonFactory().createParser(text)) {
             JsonToken t;
@@ -471,7 +472,8 @@ public final class LossSpecReader {
         return v;
     }
 
-    private static String kind(JsonNode n) {
+    /** The value as a message shows it: {@code the string "x"}, {@code the number 5}, {@code null}, ... */
+    static String kind(JsonNode n) {
         if (n.isTextual()) {
             return "the string \"" + n.asText() + "\"";
         }

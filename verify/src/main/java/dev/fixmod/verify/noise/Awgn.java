@@ -16,23 +16,44 @@ package dev.fixmod.verify.noise;
  *   </tbody>
  * </table>
  *
- * @param n0     complex noise power, finite and ≥ 0
- * @param method the Gaussian sampler
+ * <p>An instance keeps its work arrays (at most about 18 KiB, sized by the first fills) so that repeated fills
+ * allocate nothing; it is therefore <b>not thread-safe</b>: use one instance per thread. The samples depend only on
+ * N0, the method, the key and the indices, never on the instance or on earlier fills.
  */
-public record Awgn(double n0, Gaussian method) {
+public final class Awgn {
 
     /** The largest complex sample index: Gaussian {@code 2m + 1} must stay a valid index. */
     public static final long MAX_INDEX = (Philox4x32.MAX_INDEX - 1) / 2;
 
     private static final int CHUNK = 1024;
 
-    public Awgn {
+    private final double n0;
+    private final Gaussian method;
+    private final Scratch scratch = new Scratch();
+
+    /**
+     * @param n0     complex noise power, finite and ≥ 0
+     * @param method the Gaussian sampler
+     */
+    public Awgn(double n0, Gaussian method) {
         if (!(n0 >= 0) || Double.isInfinite(n0)) {
             throw new IllegalArgumentException("N0 (complex noise power) must be finite and >= 0, got " + n0);
         }
         if (method == null) {
             throw new IllegalArgumentException("a Gaussian method is required (box-muller or ziggurat)");
         }
+        this.n0 = n0;
+        this.method = method;
+    }
+
+    /** The complex noise power N0. */
+    public double n0() {
+        return n0;
+    }
+
+    /** The Gaussian sampler. */
+    public Gaussian method() {
+        return method;
     }
 
     /** σ = sqrt(N0 / 2), the standard deviation of each real dimension. */
@@ -46,10 +67,10 @@ public record Awgn(double n0, Gaussian method) {
         Checks.slice("Q", q.length, qOffset, length);
         Checks.indices("complex noise sample", firstSample, length, MAX_INDEX);
         double sigma = sigma();
-        double[] z = new double[2 * Math.min(length, CHUNK)];
+        double[] z = scratch.doubles(2 * Math.min(length, CHUNK));
         for (int done = 0; done < length; done += CHUNK) {
             int count = Math.min(CHUNK, length - done);
-            method.fill(z, 0, 2 * count, key, 2 * (firstSample + done));
+            method.fill(z, 0, 2 * count, key, 2 * (firstSample + done), scratch);
             for (int k = 0; k < count; k++) {
                 i[iOffset + done + k] = sigma * z[2 * k];
                 q[qOffset + done + k] = sigma * z[2 * k + 1];

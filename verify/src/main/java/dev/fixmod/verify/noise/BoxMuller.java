@@ -16,8 +16,7 @@ final class BoxMuller {
     private BoxMuller() {
     }
 
-    static void fill(double[] out, int offset, int length, StreamKey key, long firstIndex) {
-        int[] block = new int[4];
+    static void fill(double[] out, int offset, int length, StreamKey key, long firstIndex, int[] block) {
         long n = firstIndex;
         int end = offset + length;
         int pos = offset;

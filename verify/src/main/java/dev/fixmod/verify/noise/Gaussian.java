@@ -53,17 +53,23 @@ public enum Gaussian {
     }
 
     /**
-     * Stores samples {@code firstIndex … firstIndex + length − 1} of {@code key} at {@code out[offset …]}.
+     * Stores samples {@code firstIndex … firstIndex + length − 1} of {@code key} at {@code out[offset …]}. Each call
+     * allocates its own small work arrays (this constant is shared by every thread); {@link Awgn} reuses its own.
      *
      * @throws IllegalArgumentException if the slice does not fit {@code out} or an index is negative or overflows
      */
     public void fill(double[] out, int offset, int length, StreamKey key, long firstIndex) {
+        fill(out, offset, length, key, firstIndex, new Scratch());
+    }
+
+    /** {@link #fill} with the caller's work arrays. */
+    void fill(double[] out, int offset, int length, StreamKey key, long firstIndex, Scratch scratch) {
         Checks.slice("out", out.length, offset, length);
         Checks.indices("Gaussian sample", firstIndex, length, Philox4x32.MAX_INDEX);
         if (this == BOX_MULLER) {
-            BoxMuller.fill(out, offset, length, key, firstIndex);
+            BoxMuller.fill(out, offset, length, key, firstIndex, scratch.block);
         } else {
-            Ziggurat.fill(out, offset, length, key, firstIndex);
+            Ziggurat.fill(out, offset, length, key, firstIndex, scratch);
         }
     }
 

@@ -106,7 +106,11 @@ public final class Philox4x32 {
     public static void fillDraws(long[] out, int offset, int length, StreamKey key, long firstDraw) {
         Checks.slice("out", out.length, offset, length);
         Checks.indices("draw", firstDraw, length, MAX_INDEX);
-        int[] block = new int[4];
+        drawsOneBlockAtATime(out, offset, length, key, firstDraw, new int[4]);
+    }
+
+    private static void drawsOneBlockAtATime(long[] out, int offset, int length, StreamKey key, long firstDraw,
+                                             int[] block) {
         long j = firstDraw;
         int end = offset + length;
         int pos = offset;
@@ -126,16 +130,16 @@ public final class Philox4x32 {
     /**
      * {@link #fillDraws} without its checks, two blocks per step with their rounds interleaved: the ten rounds of one
      * block are a chain of dependent multiplications, and a second independent chain fills the multiplier's idle
-     * cycles. The same words as {@link #fillDraws}; callers have checked the slice and the indices.
+     * cycles. The same words as {@link #fillDraws}; callers have checked the slice and the indices. {@code block}
+     * is scratch for a partial block at either end.
      */
-    static void draws(long[] out, int offset, int length, StreamKey key, long firstDraw) {
+    static void draws(long[] out, int offset, int length, StreamKey key, long firstDraw, int[] block) {
         int k0 = key.k0();
         int k1 = key.k1();
         int pos = offset;
         int end = offset + length;
         long j = firstDraw;
         if ((j & 1) != 0 && pos < end) {
-            int[] block = new int[4];
             block(key, j >>> 1, 0, block, 0);
             out[pos++] = join(block[2], block[3]);
             j++;
@@ -183,7 +187,7 @@ public final class Philox4x32 {
             j += 4;
         }
         if (pos < end) {
-            fillDraws(out, pos, end - pos, key, j);
+            drawsOneBlockAtATime(out, pos, end - pos, key, j, block);
         }
     }
 

@@ -56,16 +56,16 @@ final class Ziggurat {
     /** Draws computed per step of {@link #fill}: enough to amortize the step, few enough to stay in L1. */
     private static final int STEP = 256;
 
-    static void fill(double[] out, int offset, int length, StreamKey key, long firstIndex) {
-        long[] words = new long[Math.min(length, STEP)];
-        Retries retries = new Retries(key);
+    static void fill(double[] out, int offset, int length, StreamKey key, long firstIndex, Scratch scratch) {
+        long[] words = scratch.words(Math.min(length, STEP));
+        Retries retries = scratch.retries;
         long n = firstIndex;
         int end = offset + length;
         int pos = offset;
         while (pos < end) {
             int count = Math.min(STEP, end - pos);
             // Gaussian n's primary word is draw n (word pair n & 1 of block n >>> 1).
-            Philox4x32.draws(words, 0, count, key, n);
+            Philox4x32.draws(words, 0, count, key, n, scratch.block);
             for (int j = 0; j < count; j++) {
                 long w = words[j];
                 int i = (int) w & (LAYERS - 1);
@@ -73,7 +73,7 @@ final class Ziggurat {
                 if (x < X[i + 1]) {
                     out[pos + j] = (w & 0x80) != 0 ? -x : x;
                 } else {
-                    retries.start(n + j);
+                    retries.start(key, n + j);
                     out[pos + j] = outsideRectangle(i, (w & 0x80) != 0, x, retries);
                 }
             }
@@ -110,20 +110,17 @@ final class Ziggurat {
 
     /**
      * The retry words of one Gaussian index, in order: block (n, draw word k) for k = 1, 2, …, two words each.
-     * One instance serves a whole fill, so the rare path allocates nothing.
+     * One instance serves every fill of its {@link Scratch}, so the rare path allocates nothing.
      */
-    private static final class Retries {
-        private final StreamKey key;
+    static final class Retries {
         private final int[] block = new int[4];
+        private StreamKey key;
         private long n;
         private int drawWord;
         private int half;
 
-        Retries(StreamKey key) {
-            this.key = key;
-        }
-
-        void start(long index) {
+        void start(StreamKey streamKey, long index) {
+            key = streamKey;
             n = index;
             drawWord = 0;
             half = 2;

@@ -1,6 +1,8 @@
 package dev.fixmod.verify.vectors;
 
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.fixed.QFormat;
+import java.util.Optional;
 
 /**
  * The kernel blocks a vector set exercises, as the generator sees them: the fixed mapper ROM, the float symbol, the
@@ -62,6 +64,25 @@ interface Datapath {
 
     /** The slicer's decision thresholds on the Q axis as demapper input codes, ascending; empty if not per axis. */
     long[] thresholdsQ();
+
+    /**
+     * The PSK sector slicer's lines as its sign tests use them (even symbols): per line {@code {a, b}}, oriented
+     * toward +I (+Q when a = 0), so that {@code a·I + b·Q >= 0} means on the line or on its larger-I side; codes of
+     * {@link #sectorLineFormat()}. Empty if the slicer has no sector lines.
+     */
+    long[][] sectorLines();
+
+    /** The format of the sector lines' codes; empty if the slicer has no sector lines. */
+    Optional<QFormat> sectorLineFormat();
+
+    /**
+     * The codes of the LLR scale constant K per level, in {@link #scaleFormat()}: slot 0 for the design level
+     * (vectors without noise), slot l + 1 for noise level l. Empty when the datapath is unscaled.
+     */
+    long[] scaleCodes();
+
+    /** The format of K; empty when the datapath is unscaled. */
+    Optional<QFormat> scaleFormat();
 
     /** The lowest code the LLR stage emits (the most negative code, or minus the largest for symmetric-saturate). */
     long llrLow();

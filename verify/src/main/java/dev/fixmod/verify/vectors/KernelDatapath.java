@@ -2,6 +2,7 @@ package dev.fixmod.verify.vectors;
 
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.demap.FixedAxisSlicer;
+import dev.fixmod.demap.FixedSectorSlicer;
 import dev.fixmod.demap.FixedSlicer;
 import dev.fixmod.demap.FixedSoftDemapper;
 import dev.fixmod.demap.LlrOptions;
@@ -10,9 +11,11 @@ import dev.fixmod.demap.SoftDemapper;
 import dev.fixmod.demap.Slicers;
 import dev.fixmod.fixed.Overflow;
 import dev.fixmod.fixed.OverflowCounter;
+import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.FixedMapper;
+import java.util.Optional;
 
 /**
  * The {@link Datapath} built from the kernel: {@link FixedMapper} over the mapper ROM, the demapper input
@@ -33,6 +36,9 @@ final class KernelDatapath implements Datapath {
     private final double[] unitsPerNat;
     private final long[] thresholdsI;
     private final long[] thresholdsQ;
+    private final long[][] sectorLines;
+    private final QFormat sectorLineFormat;
+    private final QFormat scaleFormat;
     private final long llrLow;
     private final long llrHigh;
 
@@ -74,12 +80,24 @@ final class KernelDatapath implements Datapath {
             unitsPerNat[s] = spec.demapper().scaling() == LlrScaling.NOISE_SCALED ? 1.0
                     : 1.0 / probe[s].idealScaleConstant();
         }
+        scaleFormat = spec.demapper().scaling() == LlrScaling.NOISE_SCALED
+                ? spec.demapper().fixedSpec().scaleConstant() : null;
         if (slicer instanceof FixedAxisSlicer axis) {
             thresholdsI = widen(axis.iThresholds());
             thresholdsQ = widen(axis.qThresholds());
         } else {
             thresholdsI = new long[0];
             thresholdsQ = new long[0];
+        }
+        if (slicer instanceof FixedSectorSlicer sector) {
+            sectorLines = new long[sector.lineCount()][];
+            for (int j = 0; j < sectorLines.length; j++) {
+                sectorLines[j] = sector.orientedLineCodes(j);
+            }
+            sectorLineFormat = sector.coefficients().format();
+        } else {
+            sectorLines = new long[0][];
+            sectorLineFormat = null;
         }
         Quantizer out = spec.demapper().llr();
         llrHigh = out.format().maxCode();
@@ -221,6 +239,38 @@ final class KernelDatapath implements Datapath {
     @Override
     public long[] thresholdsQ() {
         return thresholdsQ.clone();
+    }
+
+    @Override
+    public long[][] sectorLines() {
+        long[][] copy = new long[sectorLines.length][];
+        for (int j = 0; j < copy.length; j++) {
+            copy[j] = sectorLines[j].clone();
+        }
+        return copy;
+    }
+
+    @Override
+    public long[] scaleCodes() {
+        if (scaleFormat == null) {
+            return new long[0];
+        }
+        FixedSoftDemapper[] d = fixed.get();
+        long[] codes = new long[d.length];
+        for (int s = 0; s < d.length; s++) {
+            codes[s] = d[s].scaleConstantCode();
+        }
+        return codes;
+    }
+
+    @Override
+    public Optional<QFormat> scaleFormat() {
+        return Optional.ofNullable(scaleFormat);
+    }
+
+    @Override
+    public Optional<QFormat> sectorLineFormat() {
+        return Optional.ofNullable(sectorLineFormat);
     }
 
     @Override

@@ -101,6 +101,72 @@ class LossCommandTest {
         assertFalse(Files.exists(dir.resolve("m2")));
     }
 
+    @Test
+    void damagedPartsGiveOneLineNamingTheFileAndTheKeyAndWriteNothing() throws IOException {
+        Path spec = dir.resolve("small.json");
+        Files.writeString(spec, SMALL);
+        Path p1 = dir.resolve("p1.json");
+        Path p2 = dir.resolve("p2.json");
+        for (int i = 1; i <= 2; i++) {
+            Run r = run("loss", spec.toString(), "--shard", i + "/2", "-o", dir.resolve("p" + i + ".json").toString(),
+                    "--threads", "1");
+            assertEquals(0, r.status(), r.err());
+        }
+        String part = Files.readString(p2);
+        // Each damage: a regular expression on the writer's compact JSON, what replaces it, and the message's tail.
+        String[][] damages = {
+            {"\"symbols\":\\d+,", "", "points[0].symbols: missing key; expected an integer from 0 to "},
+            {"\"float-bit-errors\":(\\d+)", "\"float-bit-errors\":\"$1\"",
+                "points[0].float-bit-errors: expected an integer from 0 to 9223372036854775807, got the string \""},
+            {"\"fixed-bit-errors\":(\\d+)", "\"fixed-bit-errors\":$1.5",
+                "points[0].fixed-bit-errors: expected an integer from 0 to 9223372036854775807, got the number "},
+            {"\"input-clips\":\\d+", "\"input-clips\":-3",
+                "points[0].input-clips: expected an integer from 0 to 9223372036854775807, got the number -3"},
+            {"\"design\":\\d+", "\"design\":null", "points[0].design: expected an integer from 0 to 2147483647, got null"},
+            {"\"float-gmi\":\"[^\"]*\"", "\"float-gmi\":1.5",
+                "points[0].float-gmi: expected a double in hexadecimal as fixmod writes it (e.g. \"0x1.8p-3\"), got the"
+                        + " number 1.5"},
+            {"\"input-error-energy\":\"[^\"]*\"", "\"input-error-energy\":\"0.25\"",
+                "points[0].input-error-energy: expected a double in hexadecimal as fixmod writes it"},
+            {"\"histogram\":\\[\\d+", "\"histogram\":[\"7\"",
+                "points[0].histogram[0]: expected an integer from 0 to 9223372036854775807, got the string \"7\""},
+            {"\"histogram\":\\[\\d+,", "\"histogram\":[",
+                "points[0].histogram: "},
+            {"\"histogram\":\\[[^\\]]*\\]", "\"histogram\":{}",
+                "points[0].histogram: expected an array of counts, got an object"},
+            {"\"bits-per-symbol\":\\d+", "\"bits-per-symbol\":true",
+                "points[0].bits-per-symbol: expected an integer from 1 to 31, got the boolean true"},
+            {"\"output-events\":\\d+\\}", "\"output-events\":0,\"x-extra\":1}",
+                "points[0].x-extra: unknown key \"x-extra\"; a point has design, snr,"},
+            {"\"shard\":2,", "", "shard: missing key; expected an integer from 1 to 999999"},
+            {"\"shards\":2", "\"shards\":\"2\"", "shards: expected an integer from 1 to 999999, got the string \"2\""},
+            {"\"spec\":\"(?:[^\"\\\\]|\\\\.)*\"", "\"spec\":7", "spec: expected a string, got the number 7"},
+            {"^\\{", "{\"x-unknown\":1,", "x-unknown: unknown key \"x-unknown\"; a partial result has schema, version,"},
+            {"\"spec-source\":\"[^\"]*\",", "", "spec-source: missing key; expected a string"},
+            {"\"version\":1", "\"version\":\"1\"", "version: expected the integer 1, got the string \"1\""},
+            {"\"points\":\\[", "\"points\":[3,", "points[0]: expected a point {\"design\": ..., ...}, got the number 3"},
+            {"\"snr\":(\\d+)", "\"snr\":$1,\"snr\":$1", "not valid JSON: Duplicate field 'snr'"},
+        };
+        for (String[] d : damages) {
+            String damaged = part.replaceFirst(d[0], d[1]);
+            assertTrue(!damaged.equals(part), "the damage " + d[0] + " applies");
+            Files.writeString(p2, damaged);
+            Path out = dir.resolve("merged");
+            Run r = run("loss", "merge", p1.toString(), p2.toString(), "-o", out.toString());
+            String what = d[0] + " -> " + d[1] + ": " + r.err();
+            assertEquals(ExitStatus.USAGE, r.status(), what);
+            assertEquals("", r.out(), what);
+            assertEquals(1, r.err().strip().split("\n").length, "one line: " + what);
+            assertTrue(r.err().startsWith("fixmod loss merge: " + p2 + ":1:"), what);
+            assertTrue(r.err().contains(": " + d[2]), what);
+            assertFalse(Files.exists(out), "nothing written: " + what);
+        }
+        // The undamaged parts still merge.
+        Files.writeString(p2, part);
+        Run ok = run("loss", "merge", p1.toString(), p2.toString(), "-o", dir.resolve("merged").toString());
+        assertEquals(0, ok.status(), ok.err());
+    }
+
     /** Runs the {@code ./fixmod loss} commands of the README's loss section in order, in a temporary folder. */
     @Test
     void readmeCommandsRunAndTheirReportsAgree() throws IOException {

@@ -34,7 +34,8 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class HdlProofTest {
     static final Path HDL = Paths.get("src", "test", "hdl");
-    static final Path SCALE = HDL.resolve("nr16qam_scale.hex");
+    /** K per level, exported by the generator into the set (row 0 design level, row l + 1 noise level l). */
+    static final Path SCALE = NrQam16Set.FOLDER.resolve("llr-scale.hex");
     /** Registers between the testbench's stimulus and its dump: input, metric, scale, output. */
     static final int LATENCY = 3;
     /** Words the testbench writes after the last vector. */

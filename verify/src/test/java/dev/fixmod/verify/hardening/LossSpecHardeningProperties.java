@@ -4,6 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.databind.util.RawValue;
+import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,6 +20,7 @@ import net.jqwik.api.Assume;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.lifecycle.AfterContainer;
 
 /**
@@ -244,6 +249,70 @@ class LossSpecHardeningProperties {
         }
     }
 
+    /** The keys of a partial result: its top level, then those of a point. */
+    static final List<String> PART_KEYS = List.of("schema", "version", "shard", "shards", "spec-source", "spec",
+            "points", "design", "snr", "symbols", "bits-per-symbol", "float-bit-errors", "float-symbol-errors",
+            "fixed-bit-errors", "fixed-symbol-errors", "float-gmi", "min-code", "max-code", "histogram",
+            "input-error-energy", "input-samples", "input-clips", "metric-events", "scale-events", "output-events");
+
+    /** Values of a type or size no key of a partial result takes; {@code MISSING} removes the key. */
+    static final List<String> MISTYPED = List.of("MISSING", "12.5", "-0.0", "null", "true", "{}", "[]", "1e400",
+            "99999999999999999999", "-99999999999999999999", "\"x\"", "\"12\"", "[\"7\"]");
+
+    /** The two parts of {@link #SPEC} in two shards, made once: the damage is done on copies. */
+    private static String[] cleanParts;
+
+    @Property(tries = 20)
+    void mistypedPartialResultsAreRejected(@ForAll("partKey") String key, @ForAll("mistyped") String value,
+                                           @ForAll @IntRange(min = 0, max = 7) int point)
+            throws IOException {
+        // A spec-source is any string (it only names the spec in messages), so a string there is no damage.
+        Assume.that(!(key.equals("spec-source") && value.startsWith("\"")));
+        String[] clean = cleanParts();
+        ObjectMapper mapper = new ObjectMapper();
+        ObjectNode root =
+                (ObjectNode) mapper.readTree(clean[1]);
+        int top = PART_KEYS.indexOf("points") + 1;
+        ObjectNode target = PART_KEYS.indexOf(key) < top ? root
+                : (ObjectNode) root.get("points").get(point % root.get("points").size());
+        if (value.equals("MISSING")) {
+            target.remove(key);
+        } else {
+            target.putRawValue(key, new RawValue(value));
+        }
+        Path sandbox = Harness.sandbox();
+        try {
+            Path p1 = Harness.write(sandbox.resolve("in/p1.json"), clean[0]);
+            Path p2 = Harness.write(sandbox.resolve("in/p2.json"), mapper.writeValueAsString(root));
+            Path out = sandbox.resolve("out/report");
+            judge("loss-merge damaged parts", sandbox, out, "loss", "merge", p1.toString(), p2.toString(), "-o",
+                    out.toString());
+        } finally {
+            Harness.delete(sandbox);
+        }
+    }
+
+    private static synchronized String[] cleanParts() {
+        if (cleanParts == null) {
+            Path sandbox = Harness.sandbox();
+            try {
+                Path spec = Harness.write(sandbox.resolve("spec.json"), SPEC);
+                String[] parts = new String[2];
+                for (int i = 0; i < 2; i++) {
+                    Path part = sandbox.resolve("p" + (i + 1) + ".json");
+                    Harness.Outcome o = Harness.run("loss", spec.toString(), "--shard", (i + 1) + "/2", "-o",
+                            part.toString(), "--quiet", "--threads", "1");
+                    assertEquals(0, o.status(), o::describe);
+                    parts[i] = new String(readBytes(part), StandardCharsets.UTF_8);
+                }
+                cleanParts = parts;
+            } finally {
+                Harness.delete(sandbox);
+            }
+        }
+        return cleanParts;
+    }
+
     private static void check(String property, byte[] spec) {
         Path sandbox = Harness.sandbox();
         try {
@@ -368,6 +437,16 @@ class LossSpecHardeningProperties {
                 List.of("--shard", "1/2/3"), List.of("--shard", "-1/2"), List.of("--shard", "1/9999999"),
                 List.of("-o", "EXISTING"), List.of("-o"), List.of("--shard", "1/2", "-o", "EXISTING"),
                 List.of("--no-such-option"), List.of("extra-argument"));
+    }
+
+    @Provide
+    Arbitrary<String> partKey() {
+        return Arbitraries.of(PART_KEYS);
+    }
+
+    @Provide
+    Arbitrary<String> mistyped() {
+        return Arbitraries.of(MISTYPED);
     }
 
     @Provide

@@ -9,6 +9,8 @@ import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -68,6 +70,28 @@ class ConsumerTest {
         assertTrue(out.contains("sha256 " + entry(port + ".bin").sha256() + "\n"), out);
         assertTrue(out.contains("sum " + sum(set.resolve(port + ".bin"), bytes, signed) + "\n"), out);
         assertTrue(out.contains("mismatches 0\n"), out);
+    }
+
+    @ParameterizedTest
+    @CsvSource({"psk8, psk8, true", "cqam32, cqam32, false", "nr-qam16, nr_qam16, false", "pam4, pam4, false"})
+    void aCProgramDecidesEveryCommittedHardVectorFromTheSlicerHeadersAlone(String name, String id, boolean sector)
+            throws IOException {
+        Path gcc = ExternalProgram.require("the C consumer check", "gcc", "cc");
+        Path src = ExternalProgram.copyResource(ConsumerTest.class, "/vectors/slicer.c",
+                temp.resolve("slicer-" + name + ".c"));
+        Path committed = VectorSuiteTest.VECTORS.resolve(name).toAbsolutePath();
+        Path exe = temp.resolve("slicer-" + name);
+        List<String> command = new ArrayList<>(List.of(gcc.toString(), "-std=c99", "-Wall", "-Wextra", "-Werror",
+                "-O1", "-I" + committed, "-DSET=" + id, "-o", exe.toString(), src.toString()));
+        if (sector) {
+            command.add("-DSECTOR");
+        }
+        ExternalProgram.runOk(temp, 120, command.toArray(String[]::new));
+        String out = ExternalProgram.runOk(temp, 60, exe.toString());
+        // The decision rules are the vector format's (minimum distance or sector sides, ties to larger I then Q;
+        // common practice, no source): the C side must reproduce every row of the committed hard port.
+        Manifest m = Manifest.read(Files.readString(committed.resolve(Manifest.FILE_NAME)), name);
+        assertEquals("rows " + m.json().get("groups").get("demapper").get("count").asLong() + "\nmismatches 0\n", out);
     }
 
     @ParameterizedTest
