@@ -176,6 +176,8 @@ public final class Simulation {
         private final Awgn awgn;
         private final SoftDemapper reference;
         private final FixedSoftDemapper datapath;
+        /** The datapath's stage counters, read after each chunk. */
+        private final List<OverflowCounter> counters;
         private final Quantizer input;
         private final double gain;
         private final OverflowCounter clips = new OverflowCounter("input");
@@ -204,6 +206,7 @@ public final class Simulation {
             this.awgn = new Awgn(point.n0, Gaussian.fromName(point.spec.gaussian()));
             this.reference = d.floatDemapper(point.n0);
             this.datapath = d.fixedDemapper(point.rx, point.llrSpec, point.n0);
+            this.counters = datapath.counters();
             this.input = d.inputQuantizer();
             this.gain = d.gain();
             this.words = new int[n];
@@ -227,7 +230,8 @@ public final class Simulation {
             boolean flat = point.flat;
             double[] txRe = point.txRe;
             double[] txIm = point.txIm;
-            QFormat in = input.format();
+            // code · 2^−n as a product: exact (|code| < 2^31, n ≤ 64), the same double as QFormat.toDouble.
+            double lsb = input.format().lsb();
             clips.reset();
             double error = 0;
             for (int s = 0; s < n; s++) {
@@ -239,12 +243,12 @@ public final class Simulation {
                 im[s] = c.im(label) + nq[s];
                 double xi = gain * (txRe[label] + ni[s]);
                 ci[s] = (int) input.quantize(xi, clips);
-                double ei = in.toDouble(ci[s]) - xi;
+                double ei = ci[s] * lsb - xi;
                 error += ei * ei;
                 if (!flat) {
                     double xq = gain * (txIm[label] + nq[s]);
                     cq[s] = (int) input.quantize(xq, clips);
-                    double eq = in.toDouble(cq[s]) - xq;
+                    double eq = cq[s] * lsb - xq;
                     error += eq * eq;
                 }
             }
@@ -283,7 +287,6 @@ public final class Simulation {
             a.inputErrorEnergy = error;
             a.inputSamples = flat ? n : 2L * n;
             a.inputClips = clips.events();
-            List<OverflowCounter> counters = datapath.counters();
             a.metricEvents = counters.get(0).events();
             a.scaleEvents = counters.get(1).events();
             a.outputEvents = counters.get(2).events();
