@@ -106,6 +106,7 @@ public record FixedLlrSpec(Rounding constantRounding, Quantizer metric, LlrScali
                                          QFormat output) {
         Rounding rounding = Rounding.HALF_EVEN;
         Constellation constellation = FixedLevels.effective(reference);
+        Checks.requireAxisFreeForQuarterTurn(algorithm, constellation);
         QFormat input = reference.format();
         FixedLevels.Bounds bounds = FixedLevels.bounds(algorithm, constellation, input);
         int valueFrac = algorithm == SoftAlgorithm.FOLDED_LINEAR ? input.fractionalBits() : 2 * input.fractionalBits();

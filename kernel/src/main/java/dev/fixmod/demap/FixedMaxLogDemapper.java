@@ -9,13 +9,17 @@ import java.util.List;
  * Exhaustive max-log in fixed point, for any constellation: against the reference ROM's points, per sample the exact integer squared distance to every point is computed, and per bit
  * {@code D = ±(min_{b=1} d − min_{b=0} d)} (twice the input's fractional bits) goes through the metric, scale
  * (K = 1/N0) and output stages. It is the bit-exact oracle of {@link FixedPerAxisMaxLogDemapper}, and the fixed
- * datapath for non-separable constellations (PSK, APSK, custom).
+ * datapath for non-separable constellations (PSK, APSK, custom) and for π/2-BPSK, whose odd-index samples are
+ * measured against the ROM's turned codes.
  *
  * <p>Not thread-safe: holds an M-entry scratch array.
  */
 public final class FixedMaxLogDemapper extends FixedSoftDemapper {
     private final long[] re;
     private final long[] im;
+    /** The ROM's codes of odd-index symbols: π/2-BPSK's turned points, else the same arrays. */
+    private final long[] oddRe;
+    private final long[] oddIm;
     private final long[] distance;
     private final BitPartition partition;
     private final int exactFractionalBits;
@@ -26,9 +30,16 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
         int m = reference.size();
         this.re = new long[m];
         this.im = new long[m];
+        boolean turns = reference.alternatesQuarterTurn();
+        this.oddRe = turns ? new long[m] : re;
+        this.oddIm = turns ? new long[m] : im;
         for (int s = 0; s < m; s++) {
             re[s] = reference.iCode(s);
             im[s] = reference.qCode(s);
+            if (turns) {
+                oddRe[s] = reference.oddICode(s);
+                oddIm[s] = reference.oddQCode(s);
+            }
         }
         this.distance = new long[constellation.size()];
         this.partition = new BitPartition(bitsPerSymbol);
@@ -38,9 +49,16 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
 
     @Override
     void prepare(long iCode, long qCode, OverflowCounter metric) {
+        prepare(iCode, qCode, false, metric);
+    }
+
+    @Override
+    void prepare(long iCode, long qCode, boolean odd, OverflowCounter metric) {
+        long[] pointI = odd ? oddRe : re;
+        long[] pointQ = odd ? oddIm : im;
         for (int s = 0; s < distance.length; s++) {
-            long dr = iCode - re[s];
-            long di = qCode - im[s];
+            long dr = iCode - pointI[s];
+            long di = qCode - pointQ[s];
             distance[s] = dr * dr + di * di;
         }
     }
@@ -77,12 +95,14 @@ public final class FixedMaxLogDemapper extends FixedSoftDemapper {
 
     /**
      * Per point: two differences, two squares and their sum. Per bit: the two halves' minima, their difference and
-     * the metric stage. Tables: the quantized points.
+     * the metric stage. Tables: the quantized points (plus, for π/2-BPSK, the negation that turns them for odd
+     * symbols, as the mapper and the slicers count it).
      */
     @Override
     DatapathCost frontCost() {
         long m = distance.length;
-        return new DatapathCost(2 * m, 3 * m, 0, 2 * m * input.wordLength())
+        return new DatapathCost(2 * m, 3 * m + (reference.alternatesQuarterTurn() ? 1 : 0), 0,
+                2 * m * input.wordLength())
                 .plus(new DatapathCost(0, 1, m - 2, 0).plus(stage(spec.metric(), exactFractionalBits))
                         .repeated(bitsPerSymbol));
     }

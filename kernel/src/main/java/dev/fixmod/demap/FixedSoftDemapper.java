@@ -7,6 +7,7 @@ import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.fixed.Rounding;
+import dev.fixmod.map.ArrayRegions;
 import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.DatapathCost;
 import java.util.ArrayList;
@@ -28,6 +29,28 @@ import java.util.Objects;
  * its own {@link OverflowCounter} ({@code llr-metric}, {@code llr-scale}, {@code llr-output}); they accumulate across
  * calls until {@link #resetCounters}. The LLRs of sample {@code n} go to {@code llr[llrOffset + n·k + b]}. The batch
  * method validates every code first and writes nothing if one lies outside the input format.
+ *
+ * <p>π/2-BPSK ({@link Constellation#alternatesQuarterTurn()}) goes through the methods that take the stream index of
+ * the sample or of a batch's first sample, as {@link SoftDemapper} documents; an odd-index sample is compared with
+ * the ROM's turned codes ({@link ConstellationRom#oddICode}, {@link ConstellationRom#oddQCode}): the points the fixed
+ * mapper emits for odd symbols. Only {@code max-log} applies; the methods without an index refuse π/2-BPSK. For
+ * {@code nr:pi2bpsk} the metric is exact, {@code D = ±(d1 − d0) = ±2·(s0 − s1)·y} in the codes' units (the
+ * {@code |s|²} terms cancel when the two codes have equal magnitude), so the LLR departs from the float value only
+ * by the ROM's rounding of a and the stage roundings: the bound of the other constellations.
+ *
+ * <table class="striped">
+ *   <caption>π/2-BPSK examples ({@code nr:pi2bpsk} unit energy in Q1.6: a = 1/√2 → code 45 (LSB 1/64); unscaled,
+ *   metric Q9.12, output Q9.12, zero-positive; the output code is D in units of 2^−12)</caption>
+ *   <thead><tr><th>symbol index</th><th>codes (I, Q)</th><th>metric D = d1 − d0</th><th>why</th></tr></thead>
+ *   <tbody>
+ *     <tr><td>0 (even)</td><td>(45, 45)</td><td>4·45·90 = 16200</td><td>4·45·(I + Q): on the b = 0 point</td></tr>
+ *     <tr><td>1 (odd)</td><td>(45, 45)</td><td>0</td><td>4·45·(Q − I): on the odd boundary</td></tr>
+ *     <tr><td>1 (odd)</td><td>(−45, 45)</td><td>16200</td><td>on the turned b = 0 point (−45, 45)</td></tr>
+ *     <tr><td>2 (even)</td><td>(−128, −128) (most negative codes)</td><td>−46080</td>
+ *         <td>4·45·(−256): no overflow in a wide metric stage</td></tr>
+ *     <tr><td>3 (odd)</td><td>(10, −3)</td><td>−2340</td><td>4·45·(−13)</td></tr>
+ *   </tbody>
+ * </table>
  *
  * <p>Instances hold scratch and counters and are <b>not thread-safe</b>: use one per thread and
  * {@link OverflowCounter#add merge} the counters afterwards.
@@ -52,6 +75,7 @@ public abstract class FixedSoftDemapper {
     private final boolean scaled;
     private final int productFractionalBits;
     private final boolean oneDimensional;
+    private final boolean alternates;
     private final StageFit scaleFit;
     private final StageFit outputFit;
     private final OverflowCounter metricCounter = new OverflowCounter(METRIC_STAGE);
@@ -68,10 +92,8 @@ public abstract class FixedSoftDemapper {
                     + " bits)");
         }
         this.constellation = FixedLevels.effective(reference);
-        if (constellation.alternatesQuarterTurn()) {
-            throw new IllegalArgumentException(constellation.name() + " turns odd symbols by +90°: derotate them by"
-                    + " −90° before demapping and use the plain two-point constellation");
-        }
+        Checks.requireAxisFreeForQuarterTurn(algorithm, constellation);
+        this.alternates = constellation.alternatesQuarterTurn();
         this.options = Objects.requireNonNull(options, "options");
         this.spec = Objects.requireNonNull(spec, "spec");
         this.bitsPerSymbol = constellation.bitsPerSymbol();
@@ -79,7 +101,8 @@ public abstract class FixedSoftDemapper {
         for (int label = 0; label < constellation.size(); label++) {
             flat &= constellation.im(label) == 0.0;
         }
-        this.oneDimensional = flat;
+        // Odd symbols of a turned constellation leave the I axis even when the even ones lie on it.
+        this.oneDimensional = flat && !alternates;
         if (options.usesPriors(constellation)) {
             throw new IllegalArgumentException("the fixed-point datapaths assume equiprobable symbols, but "
                     + constellation.name() + " has non-uniform probabilities: turn priors off");
@@ -221,25 +244,60 @@ public abstract class FixedSoftDemapper {
     /**
      * Writes the k LLR codes of the sample {@code (iCode, qCode)} to {@code llr[llrOffset …]}. Integer-only.
      *
-     * @throws IllegalArgumentException if a code lies outside the input format or the output does not fit
+     * @throws IllegalArgumentException if a code lies outside the input format, the output does not fit, or the
+     *                                  constellation turns odd symbols (π/2-BPSK: use {@link #llr(int, int, long,
+     *                                  int[], int)})
      */
     public final void llr(int iCode, int qCode, int[] llr, int llrOffset) {
+        if (alternates) {
+            throw Checks.streamIndexNeeded(constellation);
+        }
+        llr(iCode, qCode, 0, llr, llrOffset);
+    }
+
+    /**
+     * Writes the k LLR codes of the sample {@code (iCode, qCode)} to {@code llr[llrOffset …]}. Integer-only.
+     *
+     * @param symbolIndex the sample's index in the stream ({@code >= 0}; its parity matters for π/2-BPSK only)
+     * @throws IllegalArgumentException if a code lies outside the input format, the output does not fit or the
+     *                                  index is negative
+     */
+    public final void llr(int iCode, int qCode, long symbolIndex, int[] llr, int llrOffset) {
         if (llr == null || llrOffset < 0 || llrOffset > llr.length - bitsPerSymbol) {
             throw outputDoesNotFit(llr, llrOffset, 1);
         }
+        ArrayRegions.requireSymbolIndex(symbolIndex);
         checkCode("I", 0, iCode);
         checkCode("Q", 0, qCode);
-        compute(iCode, qCode, llr, llrOffset);
+        compute(iCode, qCode, alternates && (symbolIndex & 1) != 0, llr, llrOffset);
     }
 
     /**
      * Writes the LLR codes of {@code count} samples {@code (i[offset + n], q[offset + n])} to
      * {@code llr[llrOffset + n·k …]}. {@code q} may be {@code null} for a one-dimensional constellation. Integer-only.
      *
-     * @throws IllegalArgumentException if an array is missing or too short, or a code lies outside the input format;
-     *                                  nothing is written then
+     * @throws IllegalArgumentException if an array is missing or too short, a code lies outside the input format, or
+     *                                  the constellation turns odd symbols (π/2-BPSK: use {@link #llr(int[], int[],
+     *                                  int, int, long, int[], int)}); nothing is written then
      */
     public final void llr(int[] i, int[] q, int offset, int count, int[] llr, int llrOffset) {
+        if (alternates) {
+            throw Checks.streamIndexNeeded(constellation);
+        }
+        llr(i, q, offset, count, 0, llr, llrOffset);
+    }
+
+    /**
+     * Writes the LLR codes of {@code count} samples {@code (i[offset + n], q[offset + n])}, of stream indices
+     * {@code firstSymbol + n}, to {@code llr[llrOffset + n·k …]}. {@code q} may be {@code null} for a
+     * one-dimensional constellation (never for π/2-BPSK). Integer-only.
+     *
+     * @param firstSymbol the stream index of the first sample ({@code >= 0}; parity matters for π/2-BPSK only)
+     * @throws IllegalArgumentException if an array is missing or too short, a code lies outside the input format or
+     *                                  the index is negative; nothing is written then
+     */
+    public final void llr(int[] i, int[] q, int offset, int count, long firstSymbol, int[] llr, int llrOffset) {
+        ArrayRegions.requireSymbolIndex(firstSymbol);
         Checks.notNull(i, "I code");
         Checks.range("I codes", i.length, offset, count);
         if (q == null && !oneDimensional) {
@@ -258,9 +316,11 @@ public abstract class FixedSoftDemapper {
                 checkCode("Q", offset + n, q[offset + n]);
             }
         }
-        if (!computeBatch(i, q, offset, count, llr, llrOffset)) {
+        // The fast paths know nothing of parity; π/2-BPSK takes the per-sample path.
+        if (alternates || !computeBatch(i, q, offset, count, llr, llrOffset)) {
             for (int n = 0; n < count; n++) {
-                compute(i[offset + n], q == null ? 0 : q[offset + n], llr, llrOffset + n * bitsPerSymbol);
+                compute(i[offset + n], q == null ? 0 : q[offset + n], alternates && ((firstSymbol + n) & 1) != 0, llr,
+                        llrOffset + n * bitsPerSymbol);
             }
         }
     }
@@ -280,15 +340,32 @@ public abstract class FixedSoftDemapper {
     /**
      * The intermediate values of every bit for one sample; the LLRs are those {@link #llr(int, int, int[], int)}
      * returns. Uses its own counters, so the datapath's counters are untouched. Allocates: for debugging only.
+     *
+     * @throws IllegalArgumentException if a code lies outside the input format or the constellation turns odd
+     *                                  symbols (π/2-BPSK: use {@link #trace(int, int, long)})
      */
     public final FixedLlrTrace trace(int iCode, int qCode) {
+        if (alternates) {
+            throw Checks.streamIndexNeeded(constellation);
+        }
+        return trace(iCode, qCode, 0);
+    }
+
+    /**
+     * The intermediate values of every bit for one sample of stream index {@code symbolIndex}; the LLRs are those
+     * {@link #llr(int, int, long, int[], int)} returns. Allocates: for debugging only.
+     *
+     * @throws IllegalArgumentException if a code lies outside the input format or the index is negative
+     */
+    public final FixedLlrTrace trace(int iCode, int qCode, long symbolIndex) {
+        ArrayRegions.requireSymbolIndex(symbolIndex);
         checkCode("I", 0, iCode);
         checkCode("Q", 0, qCode);
         OverflowCounter m = OverflowCounter.unnamed();
         OverflowCounter s = OverflowCounter.unnamed();
         OverflowCounter o = OverflowCounter.unnamed();
         List<FixedLlrTrace.Bit> bits = new ArrayList<>();
-        prepare(iCode, qCode, m);
+        prepare(iCode, qCode, alternates && (symbolIndex & 1) != 0, m);
         for (int b = 0; b < bitsPerSymbol; b++) {
             List<FixedLlrTrace.Value> values = new ArrayList<>();
             describe(b, iCode, qCode, values);
@@ -315,8 +392,8 @@ public abstract class FixedSoftDemapper {
         return new FixedLlrTrace(iCode, qCode, bits);
     }
 
-    private void compute(int iCode, int qCode, int[] llr, int llrOffset) {
-        prepare(iCode, qCode, metricCounter);
+    private void compute(int iCode, int qCode, boolean odd, int[] llr, int llrOffset) {
+        prepare(iCode, qCode, odd, metricCounter);
         for (int b = 0; b < bitsPerSymbol; b++) {
             // An output format has at most 32 signed bits: the code fits an int.
             llr[llrOffset + b] = (int) finish(metric(b, iCode, qCode, metricCounter));
@@ -358,6 +435,14 @@ public abstract class FixedSoftDemapper {
 
     /** Per-sample work shared by all bits (distances, folds); integer-only. */
     abstract void prepare(long iCode, long qCode, OverflowCounter metric);
+
+    /**
+     * {@link #prepare(long, long, OverflowCounter)} for a symbol of even or odd index; {@code odd} is true only for
+     * π/2-BPSK, which only the exhaustive datapath accepts (it overrides this). Integer-only.
+     */
+    void prepare(long iCode, long qCode, boolean odd, OverflowCounter metric) {
+        prepare(iCode, qCode, metric);
+    }
 
     /** Bit {@code b}'s metric code after the metric stage, with the LLR sign applied; integer-only. */
     abstract long metric(int b, long iCode, long qCode, OverflowCounter metric);

@@ -14,6 +14,9 @@ import dev.fixmod.map.DatapathCost;
 public final class MaxLogDemapper extends SoftDemapper {
     private final double[] re;
     private final double[] im;
+    /** The points of odd-index symbols: π/2-BPSK's turned points, else the same arrays. */
+    private final double[] oddRe;
+    private final double[] oddIm;
     private final double[] logPrior;
     private final boolean priors;
     private final double invN0;
@@ -26,6 +29,8 @@ public final class MaxLogDemapper extends SoftDemapper {
         int m = constellation.size();
         this.re = constellation.realParts();
         this.im = constellation.imaginaryParts();
+        this.oddRe = constellation.alternatesQuarterTurn() ? turnedRe(im) : re;
+        this.oddIm = constellation.alternatesQuarterTurn() ? re : im;
         this.priors = options.usesPriors(constellation);
         this.logPrior = new double[m];
         for (int label = 0; label < m; label++) {
@@ -38,6 +43,13 @@ public final class MaxLogDemapper extends SoftDemapper {
 
     @Override
     void compute(double yRe, double yIm, double[] llr, int llrOffset) {
+        compute(yRe, yIm, false, llr, llrOffset);
+    }
+
+    @Override
+    void compute(double yRe, double yIm, boolean odd, double[] llr, int llrOffset) {
+        double[] re = odd ? oddRe : this.re;
+        double[] im = odd ? oddIm : this.im;
         for (int s = 0; s < distance.length; s++) {
             double dr = yRe - re[s];
             double di = yIm - im[s];

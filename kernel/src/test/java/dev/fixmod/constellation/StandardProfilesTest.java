@@ -32,7 +32,7 @@ class StandardProfilesTest {
 
     @Test
     void nrPi2BpskFollowsTheFormula() {
-        // 3GPP TS 38.211 §5.1.2: d(i) = e^{jπ(i mod 2)/2}/√2 · [(1−2b(i)) + j(1−2b(i))].
+        // 3GPP TS 38.211 §5.1.1 (subclause number from memory): d(i) = e^{jπ(i mod 2)/2}/√2 · [(1−2b(i)) + j(1−2b(i))].
         Constellation c = Catalogue.resolve("nr:pi2bpsk");
         assertTrue(c.alternatesQuarterTurn());
         assertEquals(Family.PI2_BPSK, c.family());

@@ -87,8 +87,10 @@ class SoftDemapperTest {
         e = assertThrows(IllegalArgumentException.class, () -> new PerAxisMaxLogDemapper(shaped, o));
         assertTrue(e.getMessage().contains("assumes equiprobable symbols"), e.getMessage());
         new PerAxisMaxLogDemapper(shaped, new LlrOptions(1.0, LlrSign.ZERO_POSITIVE, false)); // priors off: fine
-        e = assertThrows(IllegalArgumentException.class, () -> new MaxLogDemapper(Catalogue.resolve("pi2bpsk"), o));
-        assertTrue(e.getMessage().contains("derotate"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class,
+                () -> new PerAxisMaxLogDemapper(Catalogue.resolve("pi2bpsk"), o));
+        assertTrue(e.getMessage().contains("needs a separable constellation")
+                && e.getMessage().contains("use max-log"), e.getMessage());
     }
 
     @Test

@@ -58,6 +58,7 @@ import picocli.CommandLine.Spec;
             "  fixmod demap -c nr:qam64 --codes 210,-73 --input-format Q2.9 --esn0 12 --llr Q5.0,half-up,saturate",
             "  fixmod demap -c qam16 --sample 1.2,0.1 --esn0 8 --scaling unscaled --metric Q3.9,floor,saturate",
             "  fixmod demap -c psk8 --sample 0.7,0.2 --esn0 6 --json",
+            "  fixmod demap -c nr:pi2bpsk --sample -0.5,0.6 --esn0 3 --odd-symbol",
             "",
             "Stage formats take a Q format, a rounding and an overflow, separated by commas or blanks: e.g."
                     + " Q4.1,half-even,symmetric-saturate. Roundings: " + "floor, ceil, toward-zero, half-up,"
@@ -104,6 +105,10 @@ public final class DemapCommand implements Callable<Integer> {
             description = "How --sample and the reference points are quantized (default: ${DEFAULT-VALUE}).")
     String inputRounding;
 
+    @Option(names = "--odd-symbol", description = "Demap the sample as a symbol of odd index, whose points pi/2-BPSK"
+            + " (pi2bpsk, nr:pi2bpsk) turns by +90 degrees; default: even index.")
+    boolean oddSymbol;
+
     @Option(names = "--n0", paramLabel = "N0", description = "Complex noise power N0 > 0.")
     String n0;
 
@@ -142,10 +147,12 @@ public final class DemapCommand implements Callable<Integer> {
             options = options.withLabeling(Labeling.fromName(labeling));
         }
         Constellation c = Catalogue.resolve(constellationName, options);
-        if (c.alternatesQuarterTurn()) {
-            throw new UsageException(c.name() + " turns odd symbols by +90°: derotate the sample by −90° and demap it"
-                    + " as bpsk");
+        if (oddSymbol && !c.alternatesQuarterTurn()) {
+            throw new UsageException("--odd-symbol: " + c.name() + " treats every symbol alike; only pi/2-BPSK"
+                    + " (pi2bpsk, nr:pi2bpsk) turns the symbols of odd index");
         }
+        // The kernel's demappers and slicers take a stream index; only its parity matters, and only for π/2-BPSK.
+        long index = oddSymbol ? 1 : 0;
         if ((sample == null) == (codes == null)) {
             throw new UsageException("give the received sample once: either --sample I,Q (reals) or --codes I,Q"
                     + " (codes of --input-format)");
@@ -167,6 +174,7 @@ public final class DemapCommand implements Callable<Integer> {
         r.normalization = Normalization.fromName(normalization);
         r.options = llr;
         r.rom = rom;
+        r.index = index;
         if (sample != null) {
             double[] v = pair("--sample", sample, oneDimensional, true);
             r.re = v[0];
@@ -182,15 +190,15 @@ public final class DemapCommand implements Callable<Integer> {
             r.re = in.toDouble(r.iCode);
             r.im = in.toDouble(r.qCode);
         }
-        r.floatSlice = Slicers.floatFor(c).slice(r.re, r.im, 0);
-        r.fixedSlice = Slicers.fixedFor(rom).slice(r.iCode, r.qCode, 0);
+        r.floatSlice = Slicers.floatFor(c).slice(r.re, r.im, index);
+        r.fixedSlice = Slicers.fixedFor(rom).slice(r.iCode, r.qCode, index);
 
         for (SoftAlgorithm a : SoftAlgorithm.values()) {
             FloatRow row = new FloatRow(a);
             try {
                 SoftDemapper d = SoftDemapper.create(a, c, llr);
                 row.llr = new double[c.bitsPerSymbol()];
-                d.llr(r.re, r.im, row.llr, 0);
+                d.llr(r.re, r.im, index, row.llr, 0);
                 row.decision = decision(row.llr, r.floatSlice, c.bitsPerSymbol());
             } catch (IllegalArgumentException notApplicable) {
                 row.reason = notApplicable.getMessage();
@@ -213,10 +221,11 @@ public final class DemapCommand implements Callable<Integer> {
                 FixedSoftDemapper d = FixedSoftDemapper.create(a, rom, llr, fixedSpec);
                 row.datapath = d;
                 row.codes = new int[c.bitsPerSymbol()];
-                d.llr(r.iCode, r.qCode, row.codes, 0);
-                row.trace = d.trace(r.iCode, r.qCode);
+                d.llr(r.iCode, r.qCode, index, row.codes, 0);
+                row.trace = d.trace(r.iCode, r.qCode, index);
                 row.reference = new double[c.bitsPerSymbol()];
-                SoftDemapper.create(a, c, llr).llr(in.toDouble(r.iCode), in.toDouble(r.qCode), row.reference, 0);
+                SoftDemapper.create(a, c, llr).llr(in.toDouble(r.iCode), in.toDouble(r.qCode), index, row.reference,
+                        0);
                 double[] asDouble = new double[row.codes.length];
                 for (int b = 0; b < asDouble.length; b++) {
                     asDouble[b] = row.codes[b];
@@ -328,6 +337,7 @@ public final class DemapCommand implements Callable<Integer> {
         Normalization normalization;
         LlrOptions options;
         ConstellationRom rom;
+        long index;
         double re;
         double im;
         int iCode;
@@ -350,6 +360,10 @@ public final class DemapCommand implements Callable<Integer> {
             sb.append(String.format(Locale.ROOT, "noise          N0 = %s (Es/N0 = %.3f dB), LLR sign %s, priors %s%n",
                     plain(options.n0()), options.esN0Db(c), options.sign(), priorsText()));
             sb.append(String.format(Locale.ROOT, "sample         I = %s, Q = %s%n", plain(re), plain(im)));
+            if (c.alternatesQuarterTurn()) {
+                sb.append(index % 2 == 1 ? "symbol         odd index: the points are turned by +90 degrees, (I, Q) -> (-Q, I)"
+                        : "symbol         even index (--odd-symbol demaps it as one of odd index)").append(System.lineSeparator());
+            }
             sb.append(String.format(Locale.ROOT, "input codes    I = %d, Q = %d (%s, %s) in %s%s%n", iCode, qCode,
                     plain(in.toDouble(iCode)), plain(in.toDouble(qCode)), in.describe(),
                     clipped ? "; the sample was clipped to the input range" : ""));
@@ -476,6 +490,9 @@ public final class DemapCommand implements Callable<Integer> {
             ObjectNode s = root.putObject("sample");
             s.put("i", re);
             s.put("q", im);
+            if (constellation.alternatesQuarterTurn()) {
+                s.put("oddSymbol", index % 2 == 1);
+            }
             ObjectNode input = s.putObject("input");
             input.put("format", rom.format().toString());
             input.put("meaning", rom.format().describe());

@@ -149,10 +149,11 @@ final class Charts {
         double g = d.gain();
         for (int s = 0; s <= steps; s++) {
             double x = -1.5 * peak + 3.0 * peak * s / steps;
-            reference.llr(x, q, fl[s], 0);
+            // Symbol index 0: for π/2-BPSK this is the transfer of the even symbols.
+            reference.llr(x, q, 0, fl[s], 0);
             int ci = (int) in.quantize(g * x, ignored);
             int cq = (int) in.quantize(g * q, ignored);
-            datapath.llr(ci, f.contains(cq) ? cq : 0, fx[s], 0);
+            datapath.llr(ci, f.contains(cq) ? cq : 0, 0, fx[s], 0);
         }
         XYSeriesCollection data = new XYSeriesCollection();
         int shown = 0;

@@ -186,7 +186,9 @@ public final class LossAnalysis {
         Constellation c = d.constellation();
         double gain = d.gain();
         QFormat f = d.input().format();
-        boolean flat = true;
+        // π/2-BPSK's odd symbols are the even ones turned by +90°: both axes carry signal, each parity half the time.
+        int parities = c.alternatesQuarterTurn() ? 2 : 1;
+        boolean flat = parities == 1;
         for (int label = 0; label < c.size(); label++) {
             flat &= c.im(label) == 0.0;
         }
@@ -200,11 +202,15 @@ public final class LossAnalysis {
         double bottom = f.minValue() - f.lsb() / 2;
         double clip = 0;
         for (int label = 0; label < c.size(); label++) {
-            double[] coords = flat ? new double[] {c.re(label)} : new double[] {c.re(label), c.im(label)};
-            for (double x : coords) {
-                double a = gain * x;
-                clip += c.probability(label) / dims
-                        * (GaussianTail.q((top - a) / sigma) + GaussianTail.q((a - bottom) / sigma));
+            for (int parity = 0; parity < parities; parity++) {
+                double re = parity == 0 ? c.re(label) : -c.im(label);
+                double im = parity == 0 ? c.im(label) : c.re(label);
+                double[] coords = flat ? new double[] {re} : new double[] {re, im};
+                for (double x : coords) {
+                    double a = gain * x;
+                    clip += c.probability(label) / dims / parities
+                            * (GaussianTail.q((top - a) / sigma) + GaussianTail.q((a - bottom) / sigma));
+                }
             }
         }
         int nearest = 0;
@@ -232,7 +238,9 @@ public final class LossAnalysis {
         double g = d.gain();
         int steps = 64;
         double[] llr = new double[c.bitsPerSymbol()];
-        boolean flat = true;
+        // π/2-BPSK: both parities (the odd symbols' LLRs are the even ones' of the turned sample).
+        int parities = c.alternatesQuarterTurn() ? 2 : 1;
+        boolean flat = parities == 1;
         for (int label = 0; label < c.size(); label++) {
             flat &= c.im(label) == 0.0;
         }
@@ -241,9 +249,11 @@ public final class LossAnalysis {
             for (int b = 0; b <= steps; b++) {
                 double x = (f.minValue() + (f.maxValue() - f.minValue()) * a / steps) / g;
                 double y = (f.minValue() + (f.maxValue() - f.minValue()) * b / steps) / g;
-                ref.llr(x, flat ? 0 : y, llr, 0);
-                for (double l : llr) {
-                    max = Math.max(max, Math.abs(l));
+                for (int parity = 0; parity < parities; parity++) {
+                    ref.llr(x, flat ? 0 : y, parity, llr, 0);
+                    for (double l : llr) {
+                        max = Math.max(max, Math.abs(l));
+                    }
                 }
             }
         }

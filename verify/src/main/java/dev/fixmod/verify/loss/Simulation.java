@@ -34,6 +34,9 @@ import java.util.concurrent.Future;
  * stage (its overflow events are the input clips) and runs the fixed datapath. Hard decisions are the LLR signs; a
  * zero LLR decides 0 (the sign convention's side for "0"), in float and fixed alike. A symbol is in error when any of
  * its bits is.
+ *
+ * <p>Symbol s of chunk c has stream index c·chunkSymbols + s: π/2-BPSK sends the odd ones turned by +90° (the float
+ * points and the transmit ROM's odd codes) and both demappers are told each symbol's index.
  */
 public final class Simulation {
 
@@ -129,10 +132,13 @@ public final class Simulation {
         final double n0;
         final int snr;
         final boolean flat;
+        final boolean turns;
         final QFormat outFormat;
-        /** The transmit ROM's points by label, in real units. */
+        /** The transmit ROM's points by label, in real units; π/2-BPSK's odd symbols use the turned ones. */
         final double[] txRe;
         final double[] txIm;
+        final double[] oddTxRe;
+        final double[] oddTxIm;
 
         Point(LossSpec spec, Design design, int snr) {
             this.spec = spec;
@@ -148,14 +154,20 @@ public final class Simulation {
             for (int label = 0; label < c.size(); label++) {
                 f &= c.im(label) == 0.0;
             }
-            this.flat = f;
+            this.turns = c.alternatesQuarterTurn();
+            // π/2-BPSK's odd symbols leave the I axis even when the even ones lie on it.
+            this.flat = f && !turns;
             this.outFormat = llrSpec.output().format();
             QFormat txf = tx.format();
             this.txRe = new double[c.size()];
             this.txIm = new double[c.size()];
+            this.oddTxRe = new double[c.size()];
+            this.oddTxIm = new double[c.size()];
             for (int label = 0; label < c.size(); label++) {
                 txRe[label] = txf.toDouble(tx.iCode(label));
                 txIm[label] = txf.toDouble(tx.qCode(label));
+                oddTxRe[label] = txf.toDouble(tx.oddICode(label));
+                oddTxIm[label] = txf.toDouble(tx.oddQCode(label));
             }
         }
     }
@@ -228,8 +240,11 @@ public final class Simulation {
             Philox4x32.fillWords(words, 0, n, labelKey, first);
             awgn.fill(ni, 0, nq, 0, n, noiseKey, first);
             boolean flat = point.flat;
+            boolean turns = point.turns;
             double[] txRe = point.txRe;
             double[] txIm = point.txIm;
+            double[] oddTxRe = point.oddTxRe;
+            double[] oddTxIm = point.oddTxIm;
             // code · 2^−n as a product: exact (|code| < 2^31, n ≤ 64), the same double as QFormat.toDouble.
             double lsb = input.format().lsb();
             clips.reset();
@@ -239,22 +254,23 @@ public final class Simulation {
                 for (int b = 0; b < k; b++) {
                     bits[s * k + b] = (byte) ((label >>> (k - 1 - b)) & 1);
                 }
-                re[s] = c.re(label) + ni[s];
-                im[s] = c.im(label) + nq[s];
-                double xi = gain * (txRe[label] + ni[s]);
+                boolean odd = turns && ((first + s) & 1) != 0;
+                re[s] = (odd ? -c.im(label) + 0.0 : c.re(label)) + ni[s];
+                im[s] = (odd ? c.re(label) : c.im(label)) + nq[s];
+                double xi = gain * ((odd ? oddTxRe[label] : txRe[label]) + ni[s]);
                 ci[s] = (int) input.quantize(xi, clips);
                 double ei = ci[s] * lsb - xi;
                 error += ei * ei;
                 if (!flat) {
-                    double xq = gain * (txIm[label] + nq[s]);
+                    double xq = gain * ((odd ? oddTxIm[label] : txIm[label]) + nq[s]);
                     cq[s] = (int) input.quantize(xq, clips);
                     double eq = cq[s] * lsb - xq;
                     error += eq * eq;
                 }
             }
-            reference.llr(re, flat ? null : im, 0, n, llrF, 0);
+            reference.llr(re, flat ? null : im, 0, n, first, llrF, 0);
             datapath.resetCounters();
-            datapath.llr(ci, flat ? null : cq, 0, n, llrC, 0);
+            datapath.llr(ci, flat ? null : cq, 0, n, first, llrC, 0);
 
             Accumulator a = chunk;
             a.reset();

@@ -11,6 +11,13 @@ import java.util.Set;
  * The demapper-input corner vectors of a set, in their fixed order: threshold sweeps, ties, extremes, zero, LLR limit
  * probes. (The label sweep is mapped like data and handled by the generator.) Each vector is an input code pair with
  * its flags; the same input is listed once, its flags the union of every reason it was chosen.
+ *
+ * <p>π/2-BPSK turns the decision boundary and the LLRs of odd-index symbols, and a corner vector's stream index is
+ * its index in the demapper group. So for it the inputs are found twice, once on the even geometry and once on the
+ * odd one, and every input of either search is listed twice, on two consecutive rows of opposite parity (the even
+ * search's inputs first, then the odd search's new ones). Each row carries the flags its own parity's search gave it;
+ * an input the other parity's search found alone keeps only the flags that describe the codes themselves
+ * (min-code, max-code, both-axes-full-scale, zero), so such a row may have no flag.
  */
 final class CornerCases {
 
@@ -25,7 +32,50 @@ final class CornerCases {
     private CornerCases() {
     }
 
-    static Result build(Datapath d, QFormat input, Set<CornerGroup> groups) {
+    /** The flags that describe an input's codes, whatever its parity. */
+    private static final int CODE_FLAGS = CornerFlag.MIN_CODE.mask() | CornerFlag.MAX_CODE.mask()
+            | CornerFlag.BOTH_AXES_FULL_SCALE.mask() | CornerFlag.ZERO.mask();
+
+    /**
+     * The corner vectors of {@code groups}; {@code firstIndex} is the demapper-group index of the first, which
+     * decides the parity of each row for π/2-BPSK.
+     */
+    static Result build(Datapath d, QFormat input, Set<CornerGroup> groups, long firstIndex) {
+        if (!d.turnsOddSymbols()) {
+            return build(d, input, groups, false);
+        }
+        Result even = build(d, input, groups, false);
+        Result odd = build(d, input, groups, true);
+        Map<String, Integer> evenFlags = new LinkedHashMap<>();
+        Map<String, Integer> oddFlags = new LinkedHashMap<>();
+        Map<String, long[]> inputs = new LinkedHashMap<>();
+        for (Vector v : even.vectors()) {
+            evenFlags.put(v.i() + "," + v.q(), v.flags());
+            inputs.putIfAbsent(v.i() + "," + v.q(), new long[] {v.i(), v.q()});
+        }
+        for (Vector v : odd.vectors()) {
+            oddFlags.put(v.i() + "," + v.q(), v.flags());
+            inputs.putIfAbsent(v.i() + "," + v.q(), new long[] {v.i(), v.q()});
+        }
+        boolean evenFirst = (firstIndex & 1) == 0;
+        List<Vector> rows = new ArrayList<>(2 * inputs.size());
+        for (Map.Entry<String, long[]> e : inputs.entrySet()) {
+            long[] v = e.getValue();
+            Integer fe = evenFlags.get(e.getKey());
+            Integer fo = oddFlags.get(e.getKey());
+            int onEven = fe != null ? fe : fo & CODE_FLAGS;
+            int onOdd = fo != null ? fo : fe & CODE_FLAGS;
+            rows.add(new Vector(v[0], v[1], evenFirst ? onEven : onOdd));
+            rows.add(new Vector(v[0], v[1], evenFirst ? onOdd : onEven));
+        }
+        List<String> unreached = new ArrayList<>();
+        even.unreachedLimits().forEach(l -> unreached.add(l + " (even symbols)"));
+        odd.unreachedLimits().forEach(l -> unreached.add(l + " (odd symbols)"));
+        return new Result(List.copyOf(rows), List.copyOf(unreached));
+    }
+
+    /** The corner vectors for symbols of one parity ({@code odd} is false unless the constellation turns). */
+    private static Result build(Datapath d, QFormat input, Set<CornerGroup> groups, boolean odd) {
         Map<String, int[]> flags = new LinkedHashMap<>();
         List<long[]> list = new ArrayList<>();
         Adder add = (i, q, f) -> {
@@ -43,10 +93,11 @@ final class CornerCases {
         };
         long min = input.minCode();
         long max = input.maxCode();
-        long[] pi = d.referenceI();
-        long[] pq = d.referenceQ();
+        long[] pi = d.referenceI(odd);
+        long[] pq = d.referenceQ(odd);
+        long parity = odd ? 1 : 0;
         if (groups.contains(CornerGroup.THRESHOLDS) && d.thresholdsI().length + d.thresholdsQ().length == 0) {
-            addBoundaryCrossings(d, input, pi, pq, add);
+            addBoundaryCrossings(d, input, pi, pq, parity, add);
         } else if (groups.contains(CornerGroup.THRESHOLDS)) {
             // The other coordinate sits on the first point's level, away from the thresholds of its own axis.
             for (long t : d.thresholdsI()) {
@@ -81,7 +132,7 @@ final class CornerCases {
         }
         List<String> unreached = new ArrayList<>();
         if (groups.contains(CornerGroup.LLR_LIMITS)) {
-            probeLlrLimits(d, input, pi, pq, add, unreached);
+            probeLlrLimits(d, input, pi, pq, parity, add, unreached);
         }
         List<Vector> vectors = new ArrayList<>(list.size());
         for (long[] v : list) {
@@ -105,7 +156,8 @@ final class CornerCases {
      * and above; otherwise the lower code (on that axis) is flagged one LSB below and the upper one LSB above. A pair
      * whose line passes through a third point's region at a probe is left out.
      */
-    private static void addBoundaryCrossings(Datapath d, QFormat input, long[] pi, long[] pq, Adder add) {
+    private static void addBoundaryCrossings(Datapath d, QFormat input, long[] pi, long[] pq, long parity,
+            Adder add) {
         int m = pi.length;
         int[] decided = new int[1];
         for (int a = 0; a < m; a++) {
@@ -115,7 +167,7 @@ final class CornerCases {
                 }
                 boolean alongI = Math.abs(pi[b] - pi[a]) >= Math.abs(pq[b] - pq[a]);
                 long other = Math.floorDiv(alongI ? pq[a] + pq[b] : pi[a] + pi[b], 2);
-                long[] crossing = bisect(d, input, alongI, other, alongI ? pi[a] : pq[a], a,
+                long[] crossing = bisect(d, input, parity, alongI, other, alongI ? pi[a] : pq[a], a,
                         alongI ? pi[b] : pq[b], b, decided);
                 if (crossing == null) {
                     continue;
@@ -125,11 +177,11 @@ final class CornerCases {
                 int on = CornerFlag.ON_THRESHOLD.mask();
                 int minus = CornerFlag.THRESHOLD_MINUS_LSB.mask();
                 int plus = CornerFlag.THRESHOLD_PLUS_LSB.mask();
-                if (onBoundary(d, alongI, other, upper)) {
+                if (onBoundary(d, parity, alongI, other, upper)) {
                     addOnAxis(add, alongI, other, lower, minus);
                     addOnAxis(add, alongI, other, upper, on);
                     addOnAxis(add, alongI, other, upper + 1, plus);
-                } else if (onBoundary(d, alongI, other, lower)) {
+                } else if (onBoundary(d, parity, alongI, other, lower)) {
                     addOnAxis(add, alongI, other, lower - 1, minus);
                     addOnAxis(add, alongI, other, lower, on);
                     addOnAxis(add, alongI, other, upper, plus);
@@ -164,16 +216,17 @@ final class CornerCases {
      * Two adjacent codes on the axis line at {@code other}, decided {@code labelA} and {@code labelB}, found by
      * bisection from {@code fromA} (a's end) to {@code toB}; null when an end or a probe is decided otherwise.
      */
-    private static long[] bisect(Datapath d, QFormat input, boolean alongI, long other, long fromA, int labelA,
-            long toB, int labelB, int[] decided) {
+    private static long[] bisect(Datapath d, QFormat input, long parity, boolean alongI, long other, long fromA,
+            int labelA, long toB, int labelB, int[] decided) {
         long lo = clamp(fromA, input);
         long hi = clamp(toB, input);
-        if (decide(d, alongI, other, lo, decided) != labelA || decide(d, alongI, other, hi, decided) != labelB) {
+        if (decide(d, parity, alongI, other, lo, decided) != labelA
+                || decide(d, parity, alongI, other, hi, decided) != labelB) {
             return null;
         }
         while (Math.abs(hi - lo) > 1) {
             long mid = Math.floorDiv(lo + hi, 2);
-            int label = decide(d, alongI, other, mid, decided);
+            int label = decide(d, parity, alongI, other, mid, decided);
             if (label == labelA) {
                 lo = mid;
             } else if (label == labelB) {
@@ -189,15 +242,15 @@ final class CornerCases {
         return Math.max(input.minCode(), Math.min(input.maxCode(), code));
     }
 
-    private static int decide(Datapath d, boolean alongI, long other, long x, int[] decided) {
+    private static int decide(Datapath d, long parity, boolean alongI, long other, long x, int[] decided) {
         long[] i = {alongI ? x : other};
         long[] q = {alongI ? other : x};
-        d.slice(i, q, 1, 0, decided);
+        d.slice(i, q, 1, parity, decided);
         return decided[0];
     }
 
-    private static boolean onBoundary(Datapath d, boolean alongI, long other, long x) {
-        return alongI ? d.onBoundary(x, other) : d.onBoundary(other, x);
+    private static boolean onBoundary(Datapath d, long parity, boolean alongI, long other, long x) {
+        return alongI ? d.onBoundary(x, other, parity) : d.onBoundary(other, x, parity);
     }
 
     private static void addOnAxis(Adder add, boolean alongI, long other, long x, int flags) {
@@ -245,7 +298,7 @@ final class CornerCases {
      * For each LLR bit and each limit, the first candidate input that drives the fixed LLR there. Candidates: the
      * extremes of the input format, then each point pushed to full scale along one or both axes.
      */
-    private static void probeLlrLimits(Datapath d, QFormat input, long[] pi, long[] pq, Adder add,
+    private static void probeLlrLimits(Datapath d, QFormat input, long[] pi, long[] pq, long parity, Adder add,
             List<String> unreached) {
         long min = input.minCode();
         long max = input.maxCode();
@@ -271,7 +324,16 @@ final class CornerCases {
             cq[c] = cand.get(c)[1];
         }
         long[] llr = new long[n * k];
-        d.llr(ci, cq, n, -1, llr);
+        if (d.turnsOddSymbols()) {
+            // Every candidate is demapped as a symbol of the one parity searched.
+            long[] one = new long[k];
+            for (int c = 0; c < n; c++) {
+                d.llr(new long[] {ci[c]}, new long[] {cq[c]}, 1, parity, -1, one);
+                System.arraycopy(one, 0, llr, c * k, k);
+            }
+        } else {
+            d.llr(ci, cq, n, 0, -1, llr);
+        }
         int probe = CornerFlag.LLR_PROBE.mask();
         for (int bit = 0; bit < k; bit++) {
             int low = -1;

@@ -8,7 +8,9 @@ import java.util.Optional;
  * The kernel blocks a vector set exercises, as the generator sees them: the fixed mapper ROM, the float symbol, the
  * demapper input quantizer, the fixed slicer and LLR datapath, and the float reference LLR. Batch methods over
  * primitive arrays; safe to share between threads (counters are passed in). A noise {@code level} of −1 means the
- * design E_s/N0 of the specification (vectors without noise).
+ * design E_s/N0 of the specification (vectors without noise). Methods that take a stream index ({@code firstSymbol},
+ * {@code symbolIndex}) apply π/2-BPSK's +90° turn to the symbols of odd index; for other constellations it is
+ * irrelevant.
  */
 interface Datapath {
 
@@ -28,10 +30,16 @@ interface Datapath {
     /** Maps labels through the fixed mapper; {@code firstSymbol} is the stream index of the first. */
     void map(int[] labels, int count, long firstSymbol, long[] i, long[] q);
 
-    /** The float (normalized) symbol of {@code label}, the channel's input. */
+    /** The float (normalized) symbol of {@code label} (of an even-index symbol for π/2-BPSK). */
     double symbolI(int label);
 
     double symbolQ(int label);
+
+    /** Whether symbols of odd index are turned by +90° (π/2-BPSK). */
+    boolean turnsOddSymbols();
+
+    /** The float symbols of {@code labels}, the channel's input; {@code firstSymbol} is the stream index of the first. */
+    void symbols(int[] labels, int count, long firstSymbol, double[] i, double[] q);
 
     /** The average symbol energy E_s of the float symbols. */
     double averageEnergy();
@@ -39,25 +47,30 @@ interface Datapath {
     /** Quantizes one real channel sample to a demapper input code. */
     long quantizeInput(double x, OverflowCounter counter);
 
-    /** The slicer's reference points in demapper input codes, by label. */
+    /** The slicer's reference points in demapper input codes, by label (even-index symbols). */
     long[] referenceI();
 
     long[] referenceQ();
 
+    /** The reference points of even ({@code odd == false}) or odd-index symbols: π/2-BPSK's turned ROM codes. */
+    long[] referenceI(boolean odd);
+
+    long[] referenceQ(boolean odd);
+
     /** Hard decisions: the label the slicer picks for each input. */
     void slice(long[] i, long[] q, int count, long firstSymbol, int[] labels);
 
-    /** Whether an input (of an even symbol) lies exactly on a decision boundary of the fixed slicer. */
-    boolean onBoundary(long i, long q);
+    /** Whether an input of stream index {@code symbolIndex} lies exactly on a decision boundary of the fixed slicer. */
+    boolean onBoundary(long i, long q, long symbolIndex);
 
     /** Fixed LLRs, {@code k} codes per input in the requested sign convention; returns the overflow events. */
-    long llr(long[] i, long[] q, int count, int level, long[] llr);
+    long llr(long[] i, long[] q, int count, long firstSymbol, int level, long[] llr);
 
     /**
      * Float reference LLRs, {@code k} per input, in the units of the LLR codes' real values (nats when the datapath
      * is noise-scaled, the metric's units when unscaled).
      */
-    void referenceLlr(double[] i, double[] q, int count, int level, double[] llr);
+    void referenceLlr(double[] i, double[] q, int count, long firstSymbol, int level, double[] llr);
 
     /** The slicer's decision thresholds on the I axis as demapper input codes, ascending; empty if not per axis. */
     long[] thresholdsI();

@@ -15,6 +15,7 @@ import dev.fixmod.fixed.QFormat;
 import dev.fixmod.fixed.Quantizer;
 import dev.fixmod.map.ConstellationRom;
 import dev.fixmod.map.FixedMapper;
+import dev.fixmod.map.FloatMapper;
 import java.util.Optional;
 
 /**
@@ -27,6 +28,7 @@ final class KernelDatapath implements Datapath {
     private final Constellation constellation;
     private final ConstellationRom rom;
     private final FixedMapper mapper;
+    private final FloatMapper symbols;
     private final Quantizer input;
     private final ConstellationRom reference;
     private final FixedSlicer slicer;
@@ -46,6 +48,7 @@ final class KernelDatapath implements Datapath {
         this.constellation = ConstellationResolver.resolve(spec.constellation());
         this.rom = ConstellationRom.of(constellation, spec.mapper());
         this.mapper = new FixedMapper(rom);
+        this.symbols = new FloatMapper(constellation);
         this.input = spec.demapper().input();
         this.reference = spec.demapper().reference(constellation);
         this.slicer = Slicers.fixedFor(reference);
@@ -158,6 +161,16 @@ final class KernelDatapath implements Datapath {
     }
 
     @Override
+    public boolean turnsOddSymbols() {
+        return constellation.alternatesQuarterTurn();
+    }
+
+    @Override
+    public void symbols(int[] labels, int count, long firstSymbol, double[] i, double[] q) {
+        symbols.mapLabels(labels, 0, count, firstSymbol, i, q, 0);
+    }
+
+    @Override
     public double averageEnergy() {
         return constellation.averageEnergy();
     }
@@ -178,24 +191,42 @@ final class KernelDatapath implements Datapath {
     }
 
     @Override
+    public long[] referenceI(boolean odd) {
+        long[] codes = new long[reference.size()];
+        for (int label = 0; label < codes.length; label++) {
+            codes[label] = odd ? reference.oddICode(label) : reference.iCode(label);
+        }
+        return codes;
+    }
+
+    @Override
+    public long[] referenceQ(boolean odd) {
+        long[] codes = new long[reference.size()];
+        for (int label = 0; label < codes.length; label++) {
+            codes[label] = odd ? reference.oddQCode(label) : reference.qCode(label);
+        }
+        return codes;
+    }
+
+    @Override
     public void slice(long[] i, long[] q, int count, long firstSymbol, int[] labels) {
         slicer.sliceLabels(narrow(i, count), narrow(q, count), 0, count, firstSymbol, labels, 0);
     }
 
     @Override
-    public boolean onBoundary(long i, long q) {
-        return slicer.onBoundary(Math.toIntExact(i), Math.toIntExact(q), 0);
+    public boolean onBoundary(long i, long q, long symbolIndex) {
+        return slicer.onBoundary(Math.toIntExact(i), Math.toIntExact(q), symbolIndex);
     }
 
     @Override
-    public long llr(long[] i, long[] q, int count, int level, long[] llr) {
+    public long llr(long[] i, long[] q, int count, long firstSymbol, int level, long[] llr) {
         FixedSoftDemapper d = fixed.get()[level + 1];
         int k = bitsPerSymbol();
         int[] ii = narrow(i, count);
         int[] qq = narrow(q, count);
         int[] out = new int[count * k];
         long before = events(d);
-        d.llr(ii, qq, 0, count, out, 0);
+        d.llr(ii, qq, 0, count, firstSymbol, out, 0);
         for (int n = 0; n < count * k; n++) {
             llr[n] = out[n];
         }
@@ -220,8 +251,8 @@ final class KernelDatapath implements Datapath {
     }
 
     @Override
-    public void referenceLlr(double[] i, double[] q, int count, int level, double[] llr) {
-        floats.get()[level + 1].llr(i, q, 0, count, llr, 0);
+    public void referenceLlr(double[] i, double[] q, int count, long firstSymbol, int level, double[] llr) {
+        floats.get()[level + 1].llr(i, q, 0, count, firstSymbol, llr, 0);
         double units = unitsPerNat[level + 1];
         if (units != 1.0) {
             int k = bitsPerSymbol();

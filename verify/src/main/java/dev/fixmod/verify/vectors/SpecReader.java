@@ -177,11 +177,6 @@ public final class SpecReader {
                     : node.has("name") ? p + "/name" : p;
             throw error(at, e.getMessage());
         }
-        if (resolved.alternatesQuarterTurn()) {
-            throw error(node != null && node.isObject() && node.has("name") ? p + "/name" : p, "'" + name
-                    + "' turns odd symbols by 90 degrees, which the vector generator does not model (its channel and"
-                    + " LLR datapath see unturned symbols); use bpsk");
-        }
         return choice;
     }
 

@@ -40,6 +40,11 @@ import java.util.function.Supplier;
  * {@code labels}) every label once. Demapper group: for each noise level the same {@code count} data symbols through
  * the channel (without noise levels, one block without noise), then every label without noise, then the constructed
  * corner inputs (thresholds, ties, extremes, zero, LLR limit probes).
+ *
+ * <p>Stream index (the parity that turns π/2-BPSK's odd symbols): in the mapper group the vector's index; in the
+ * demapper group data symbol j of every level has index j, as in the mapper group, and the label sweep and the corner
+ * inputs have their index in the group. For π/2-BPSK the corner inputs are built for both parities and each is listed
+ * twice, on consecutive rows of either parity ({@link CornerCases}).
  */
 public final class VectorSetGenerator {
 
@@ -80,7 +85,9 @@ public final class VectorSetGenerator {
         this.datapath = KernelDatapath.of(spec);
         this.k = datapath.bitsPerSymbol();
         this.m = datapath.size();
-        this.corners = CornerCases.build(datapath, spec.demapper().input().format(), spec.cornerCases());
+        long cornerStart = Math.max(1, spec.noise().levelsDb().size()) * spec.count()
+                + (spec.includes(CornerGroup.LABELS) ? m : 0);
+        this.corners = CornerCases.build(datapath, spec.demapper().input().format(), spec.cornerCases(), cornerStart);
         int levels = spec.noise().levelsDb().size();
         n0ByLevel = new double[levels];
         double es = datapath.averageEnergy();
@@ -368,10 +375,7 @@ public final class VectorSetGenerator {
     /** Channel, quantizer and demapper for mapped symbols; {@code symbol} is the stream index of the first. */
     private void computeData(Batch b, int level, long indexInBlock, long symbol) {
         int n = b.size;
-        for (int j = 0; j < n; j++) {
-            b.chanI[j] = datapath.symbolI(b.label[j]);
-            b.chanQ[j] = datapath.symbolQ(b.label[j]);
-        }
+        datapath.symbols(b.label, n, symbol, b.chanI, b.chanQ);
         if (level >= 0) {
             double[] ni = new double[n];
             double[] nq = new double[n];
@@ -405,8 +409,8 @@ public final class VectorSetGenerator {
     private void demap(Batch b, int level, long symbol) {
         int n = b.size;
         datapath.slice(b.inI, b.inQ, n, symbol, b.hard);
-        b.llrOverflows = datapath.llr(b.inI, b.inQ, n, level, b.llr);
-        datapath.referenceLlr(b.chanI, b.chanQ, n, level, b.ref);
+        b.llrOverflows = datapath.llr(b.inI, b.inQ, n, symbol, level, b.llr);
+        datapath.referenceLlr(b.chanI, b.chanQ, n, symbol, level, b.ref);
         long low = datapath.llrLow();
         long high = datapath.llrHigh();
         for (int j = 0; j < n; j++) {

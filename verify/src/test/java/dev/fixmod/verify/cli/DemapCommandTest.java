@@ -104,6 +104,45 @@ class DemapCommandTest {
     }
 
     @Test
+    void piOverTwoBpskDemapsTheSampleAsAnEvenOrAnOddSymbol() throws Exception {
+        // 3GPP TS 38.211 §5.1.1 points a(1 + j)(1 − 2b), times j on odd symbols; the exact LLR on AWGN is
+        // 4a(I + Q)/N0 (even) and 4a(Q − I)/N0 (odd), a = 1/√2 (derived in the kernel's Pi2BpskDemapperTest).
+        double a = 1 / StrictMath.sqrt(2);
+        for (boolean odd : new boolean[] {false, true}) {
+            JsonNode root = odd
+                    ? json("demap", "-c", "nr:pi2bpsk", "--sample", "-0.5,0.6", "--n0", "0.5", "--odd-symbol", "--json")
+                    : json("demap", "-c", "nr:pi2bpsk", "--sample", "-0.5,0.6", "--n0", "0.5", "--json");
+            assertEquals(odd, root.get("sample").get("oddSymbol").asBoolean());
+            double want = 4 * a * (odd ? 0.6 + 0.5 : 0.6 - 0.5) / 0.5;
+            for (int row = 0; row < 2; row++) { // log-map, max-log
+                assertEquals(want, root.get("float").get(row).get("llr").get(0).asDouble(), 1e-12);
+            }
+            assertEquals(false, root.get("float").get(2).get("available").asBoolean(), "max-log-per-axis");
+            Constellation c = Catalogue.resolve("nr:pi2bpsk");
+            LlrOptions o = new LlrOptions(0.5, dev.fixmod.demap.LlrSign.ZERO_POSITIVE, true);
+            ConstellationRom rom = ConstellationRom.of(c,
+                    new Quantizer(QFormat.parse("Q2.9"), Rounding.HALF_EVEN, Overflow.SATURATE));
+            FixedSoftDemapper d = FixedSoftDemapper.create(SoftAlgorithm.MAX_LOG, rom, o,
+                    FixedLlrSpec.suggested(SoftAlgorithm.MAX_LOG, rom, o, QFormat.parse("Q4.1")));
+            int[] codes = new int[1];
+            d.llr(-256, 307, odd ? 1 : 0, codes, 0);
+            assertEquals(codes[0], root.get("fixed").get(0).get("bits").get(0).get("llrCode").asInt());
+        }
+        Run text = run("demap", "-c", "pi2bpsk", "--sample", "0.2,-0.9", "--n0", "1", "--odd-symbol");
+        assertEquals(0, text.status(), text.err());
+        assertTrue(text.out().contains("symbol         odd index: the points are turned by +90 degrees"), text.out());
+        assertTrue(text.out().contains("slicers        float 1, fixed 1"), text.out()); // odd points ±j: Q < 0
+    }
+
+    @Test
+    void theOddSymbolSwitchIsRefusedWhereParityMeansNothing() {
+        Run r = run("demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--odd-symbol");
+        assertEquals(2, r.status());
+        assertEquals("", r.out());
+        assertTrue(r.err().contains("--odd-symbol: qam16 treats every symbol alike; only pi/2-BPSK"), r.err());
+    }
+
+    @Test
     void algorithmsThatDoNotApplyAreListedWithTheReason() {
         Run r = run("demap", "-c", "psk8", "--sample", "0.7,0.2", "--esn0", "6");
         assertEquals(0, r.status(), r.err());
@@ -140,7 +179,8 @@ class DemapCommandTest {
             {"demap", "-c", "qam16", "--sample", "0,0", "--n0", "1", "--scaling", "unscaled", "--scale-constant",
                 "UQ4.12"},
             {"demap", "-c", "qam99", "--sample", "0,0", "--n0", "1"},
-            {"demap", "-c", "pi2bpsk", "--sample", "0,0", "--n0", "1"},
+            {"demap", "-c", "pi2bpsk", "--sample", "0.5", "--n0", "1"}, // odd symbols need Q: no 1-D shorthand
+            {"demap", "-c", "psk8", "--sample", "0,0", "--n0", "1", "--odd-symbol"},
         };
         for (String[] args : cases) {
             Run r = run(args);

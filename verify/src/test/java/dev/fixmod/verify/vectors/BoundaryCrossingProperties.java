@@ -115,7 +115,7 @@ class BoundaryCrossingProperties {
         VectorSpec spec = SpecReader.parse(specText, "p.json");
         KernelDatapath d = KernelDatapath.of(spec);
         QFormat input = spec.demapper().input().format();
-        List<CornerCases.Vector> vectors = CornerCases.build(d, input, THRESHOLDS).vectors();
+        List<CornerCases.Vector> vectors = CornerCases.build(d, input, THRESHOLDS, 0).vectors();
         Map<String, CornerCases.Vector> byCode = new HashMap<>();
         for (CornerCases.Vector v : vectors) {
             byCode.put(v.i() + "," + v.q(), v);
@@ -127,7 +127,7 @@ class BoundaryCrossingProperties {
         for (CornerCases.Vector v : vectors) {
             assertNotEquals(0, v.flags() & (on | minus | plus), "every threshold vector carries a threshold flag");
             if ((v.flags() & on) != 0) {
-                assertTrue(d.onBoundary(v.i(), v.q()));
+                assertTrue(d.onBoundary(v.i(), v.q(), 0));
                 c.onBoundary.add(new long[] {v.i(), v.q()});
             }
             if ((v.flags() & minus) == 0) {

@@ -106,7 +106,7 @@ class SpecReaderTest {
             {"constellation": {"name": "qam17"}}                        | s.json:1:20: constellation.name:
             {"constellation": "nr:qam17"}                               | s.json:1:2: constellation:
             {"constellation": 16}                                       | s.json:1:2: constellation: expected a constellation name such as "nr:qam16" or an object {"name": ...}, got the number 16
-            {"constellation": "pi2bpsk"}                                | s.json:1:2: constellation: 'pi2bpsk' turns odd symbols by 90 degrees
+            {"constellation": "pi2bpsk", "demapper": {"algorithm": "max-log-per-axis"}} | demapper.algorithm: max-log-per-axis needs a separable constellation, and pi2bpsk is not: it turns odd-index symbols by +90°
             {"constellation": {"name": "qam16", "labeling": "spiral"}}  | constellation.labeling: unknown labeling 'spiral'
             {"constellation": {"normalization": "unit"}}                | constellation.normalization: unknown normalization 'unit'; expected one of none, unit-energy
             {"constellation": {"name": "nr:qam16", "labeling": "gray"}} | constellation.labeling:

@@ -279,7 +279,8 @@ class VectorSetGeneratorTest {
         // (N0 = 0.1) that is −8 nats: a Q5.0 output (LSB 1 nat) never reaches −31 on b1 and b3, while every other
         // limit is reachable.
         VectorSpec s = SpecReader.parse("{\"constellation\": \"qam16\", \"count\": 0}", "d.json");
-        CornerCases.Result r = CornerCases.build(KernelDatapath.of(s), s.demapper().input().format(), s.cornerCases());
+        CornerCases.Result r = CornerCases.build(KernelDatapath.of(s), s.demapper().input().format(), s.cornerCases(),
+                0);
         assertEquals(List.of("b1 low", "b3 low"), r.unreachedLimits());
     }
 
