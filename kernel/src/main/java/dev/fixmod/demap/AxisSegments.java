@@ -82,26 +82,10 @@ final class AxisSegments {
     }
 
     /**
-     * The segment of doubled coordinate {@code twoY}: the number of boundaries at or below it. A binary search whose
-     * steps select with a conditional move instead of a branch: noisy samples make the branch unpredictable, and a
-     * mispredicted branch costs more than the whole step.
+     * The segment of doubled code {@code twoY}: the number of {@code boundaries} at or below it; integer-only. A
+     * binary search whose steps select with a conditional move instead of a branch: noisy samples make the branch
+     * unpredictable, and a mispredicted branch costs more than the whole step.
      */
-    static int segmentOf(double[] boundaries, double twoY) {
-        int n = boundaries.length;
-        if (n == 0) {
-            return 0;
-        }
-        int base = 0;
-        // Invariant: the count lies in [base, base + n].
-        while (n > 1) {
-            int half = n >>> 1;
-            base = boundaries[base + half] <= twoY ? base + half : base;
-            n -= half;
-        }
-        return boundaries[base] <= twoY ? base + 1 : base;
-    }
-
-    /** {@link #segmentOf} on integer boundaries (integer-only). */
     static int segmentOfCode(long[] boundaries, long twoY) {
         int n = boundaries.length;
         if (n == 0) {
@@ -116,7 +100,7 @@ final class AxisSegments {
         return boundaries[base] <= twoY ? base + 1 : base;
     }
 
-    /** The number of comparisons {@link #segmentOf} makes on {@code n} boundaries: ⌈log2(n + 1)⌉. */
+    /** The number of comparisons a binary search makes on {@code n} boundaries: ⌈log2(n + 1)⌉. */
     static int searchComparisons(int n) {
         return 32 - Integer.numberOfLeadingZeros(n);
     }

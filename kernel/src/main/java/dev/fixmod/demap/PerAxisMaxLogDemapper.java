@@ -3,6 +3,7 @@ package dev.fixmod.demap;
 import dev.fixmod.constellation.AxisLayout;
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.map.DatapathCost;
+import java.util.stream.IntStream;
 
 /**
  * Per-dimension max-log for separable constellations (PAM, square and rectangular QAM, any labeling of the axes).
@@ -12,9 +13,11 @@ import dev.fixmod.map.DatapathCost;
  * the sample's I or Q part and {@code l} that axis's levels. The result equals {@link MaxLogDemapper} (uniform priors).
  *
  * <p>It is evaluated in closed form by segment: between consecutive midpoints of same-bit levels the nearest bit-0
- * level {@code l0} and bit-1 level {@code l1} are fixed and {@code L = (l0 − l1)(2y − l0 − l1)/N0}. A binary search
- * over the doubled midpoints finds the segment. For Gray 16-QAM on the grid ±1, ±3 this gives, per axis and with
- * fixmod's labels (level −3 ↦ 00, −1 ↦ 01, +1 ↦ 11, +3 ↦ 10):
+ * level {@code l0} and bit-1 level {@code l1} are fixed and {@code L = (l0 − l1)(2y − l0 − l1)/N0}. One search per
+ * axis over the doubled midpoints of all the axis's bits ({@link AxisCells}: a direct index, then a comparison or two)
+ * finds the segment of each of them; {@link #cost} counts the per-bit binary search a datapath would make. For Gray
+ * 16-QAM on the grid ±1, ±3 this gives, per axis and with fixmod's labels (level −3 ↦ 00, −1 ↦ 01, +1 ↦ 11,
+ * +3 ↦ 10):
  *
  * <table class="striped">
  *   <caption>Per-axis max-log of Gray 16-QAM, in units of 1/N0 (zero-positive)</caption>
@@ -29,12 +32,21 @@ import dev.fixmod.map.DatapathCost;
  * <p>This demapper keeps no scratch, so one instance may be shared between threads (the other demappers may not).
  */
 public final class PerAxisMaxLogDemapper extends SoftDemapper {
-    private final int[] axis;
-    private final double[][] boundaries;
-    /** Per bit and segment: {@code sign·(l0 − l1)/N0}. */
-    private final double[][] gain;
-    /** Per bit and segment: {@code l0 + l1}. */
-    private final double[][] offset;
+    /** Per bit: whether the Q axis carries it. */
+    private final boolean[] onQ;
+    private final AxisCells cellsI;
+    private final AxisCells cellsQ;
+    /** Where the rows of the Q cells begin in {@link #cellGain} and {@link #cellOffset}. */
+    private final int qRows;
+    /**
+     * At {@code row·k + b}, row = the I cell or qRows + the Q cell: the segment's {@code sign·(l0 − l1)/N0} for bit
+     * b in that cell of its axis (the other axis's bits are unused there).
+     */
+    private final double[] cellGain;
+    /** The same place: the segment's {@code l0 + l1}. */
+    private final double[] cellOffset;
+    /** Per bit: the number of segments. */
+    private final int[] segments;
 
     public PerAxisMaxLogDemapper(Constellation constellation, LlrOptions options) {
         super(SoftAlgorithm.MAX_LOG_PER_AXIS, constellation, options);
@@ -44,32 +56,54 @@ public final class PerAxisMaxLogDemapper extends SoftDemapper {
         int[] axisBits = {layout.iBits().length, layout.qBits().length};
         double invN0 = 1.0 / options.n0();
         int sign = options.sign().factor();
-        this.axis = places.axis;
-        this.boundaries = new double[bitsPerSymbol][];
-        this.gain = new double[bitsPerSymbol][];
-        this.offset = new double[bitsPerSymbol][];
-        for (int b = 0; b < bitsPerSymbol; b++) {
-            double[] lv = levels[axis[b]];
-            AxisSegments seg = AxisSegments.of(lv, axisBits[axis[b]], places.position[b]);
-            boundaries[b] = seg.boundaries;
-            int n = seg.zeroLevel.length;
-            gain[b] = new double[n];
-            offset[b] = new double[n];
-            for (int s = 0; s < n; s++) {
-                double l0 = lv[seg.zeroLevel[s]];
-                double l1 = lv[seg.oneLevel[s]];
-                gain[b][s] = sign * (l0 - l1) * invN0;
-                offset[b][s] = l0 + l1;
+        int k = bitsPerSymbol;
+        AxisSegments[] seg = new AxisSegments[k];
+        this.segments = new int[k];
+        this.onQ = new boolean[k];
+        for (int b = 0; b < k; b++) {
+            seg[b] = AxisSegments.of(levels[places.axis[b]], axisBits[places.axis[b]], places.position[b]);
+            segments[b] = seg[b].zeroLevel.length;
+            onQ[b] = places.axis[b] == 1;
+        }
+        AxisCells[] cells = new AxisCells[2];
+        for (int a = 0; a < 2; a++) {
+            int axis = a;
+            cells[a] = AxisCells.of(IntStream.range(0, k).filter(b -> places.axis[b] == axis)
+                    .mapToObj(b -> seg[b].boundaries).toArray(double[][]::new));
+        }
+        this.cellsI = cells[0];
+        this.cellsQ = cells[1];
+        this.qRows = cellsI.boundaries() + 1;
+        int rows = qRows + cellsQ.boundaries() + 1;
+        this.cellGain = new double[rows * k];
+        this.cellOffset = new double[rows * k];
+        for (int b = 0; b < k; b++) {
+            int a = places.axis[b];
+            double[] lv = levels[a];
+            int[] segmentOfCell = cells[a].segments(seg[b].boundaries);
+            int first = a == 0 ? 0 : qRows;
+            for (int c = 0; c < segmentOfCell.length; c++) {
+                int s = segmentOfCell[c];
+                double l0 = lv[seg[b].zeroLevel[s]];
+                double l1 = lv[seg[b].oneLevel[s]];
+                cellGain[(first + c) * k + b] = sign * (l0 - l1) * invN0;
+                cellOffset[(first + c) * k + b] = l0 + l1;
             }
         }
     }
 
     @Override
     void compute(double yRe, double yIm, double[] llr, int llrOffset) {
-        for (int b = 0; b < bitsPerSymbol; b++) {
-            double twoY = 2 * (axis[b] == 0 ? yRe : yIm);
-            int s = AxisSegments.segmentOf(boundaries[b], twoY);
-            llr[llrOffset + b] = gain[b][s] * (twoY - offset[b][s]) + 0.0; // + 0.0 turns −0.0 into 0.0
+        // One cell search per axis serves all of its bits.
+        int k = bitsPerSymbol;
+        double twoI = 2 * yRe;
+        double twoQ = 2 * yIm;
+        int rowI = cellsI.cellOf(twoI) * k;
+        int rowQ = (qRows + cellsQ.cellOf(twoQ)) * k;
+        for (int b = 0; b < k; b++) {
+            boolean q = onQ[b];
+            int at = (q ? rowQ : rowI) + b;
+            llr[llrOffset + b] = cellGain[at] * ((q ? twoQ : twoI) - cellOffset[at]) + 0.0; // + 0.0: −0.0 to 0.0
         }
     }
 
@@ -81,7 +115,7 @@ public final class PerAxisMaxLogDemapper extends SoftDemapper {
     public DatapathCost cost() {
         DatapathCost total = DatapathCost.ZERO;
         for (int b = 0; b < bitsPerSymbol; b++) {
-            int n = gain[b].length;
+            int n = segments[b];
             total = total.plus(new DatapathCost(1, 1, AxisSegments.searchComparisons(n - 1),
                     (long) DOUBLE_BITS * (n - 1 + 2 * n)));
         }

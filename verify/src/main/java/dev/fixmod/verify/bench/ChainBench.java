@@ -1,6 +1,6 @@
 package dev.fixmod.verify.bench;
 
-import dev.fixmod.demap.SoftAlgorithm;
+import dev.fixmod.verify.loss.Simulation;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -15,9 +15,10 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Threads;
 
 /**
- * The whole {@link MonteCarloChain} (per-axis max-log, float and fixed); one operation is one symbol. The two
- * methods differ only in the number of threads JMH runs them on, each thread with its own chain and symbol range;
- * JMH reports their summed throughput.
+ * The Monte Carlo chain of the loss analysis ({@link Simulation.Worker}, per-axis max-log, float and fixed, see
+ * {@link Workload#chainWorker}); one operation is one symbol, one call one chunk. The two methods differ only in the
+ * number of threads JMH runs them on, each thread with its own worker and chunk range; JMH reports their summed
+ * throughput.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
@@ -28,13 +29,13 @@ public class ChainBench {
     @Param({"16-qam", "256-qam"})
     public String scenario;
 
-    private MonteCarloChain chain;
+    private Simulation.Worker worker;
     private long next;
 
     @Setup
     public void setUp() {
-        chain = new MonteCarloChain(Workload.of(scenario), SoftAlgorithm.MAX_LOG_PER_AXIS, Workload.BLOCK);
-        next = THREADS.getAndIncrement() << 40;
+        worker = Workload.of(scenario).chainWorker();
+        next = THREADS.getAndIncrement() << 32;
     }
 
     @Benchmark
@@ -52,8 +53,7 @@ public class ChainBench {
     }
 
     private long step() {
-        chain.run(next);
-        next += Workload.BLOCK;
-        return chain.symbols();
+        worker.run(next++);
+        return worker.floatBitErrors() + worker.fixedBitErrors();
     }
 }

@@ -3,6 +3,7 @@ package dev.fixmod.verify.bench;
 import dev.fixmod.demap.FixedSoftDemapper;
 import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.demap.SoftDemapper;
+import dev.fixmod.verify.loss.Simulation;
 import dev.fixmod.verify.noise.Gaussian;
 import dev.fixmod.verify.noise.StreamKey;
 import java.io.IOException;
@@ -52,12 +53,10 @@ public final class CpuTime {
                         next[0] += z.length;
                     }, z.length), Double.NaN));
         }
-        MonteCarloChain chain = new MonteCarloChain(w, SoftAlgorithm.MAX_LOG_PER_AXIS, block);
-        long[] symbol = {0};
-        out.add(new Measurement("ChainBench.oneThread", Map.of("scenario", "256-qam"), 1, perItem(() -> {
-            chain.run(symbol[0]);
-            symbol[0] += block;
-        }, block), Double.NaN));
+        Simulation.Worker chain = w.chainWorker();
+        long[] chunk = {0};
+        out.add(new Measurement("ChainBench.oneThread", Map.of("scenario", "256-qam"), 1,
+                perItem(() -> chain.run(chunk[0]++), block), Double.NaN));
         WriterBench writer = new WriterBench();
         writer.format = "hex";
         writer.sink = "null";

@@ -1,9 +1,9 @@
 package dev.fixmod.verify.bench;
 
-import dev.fixmod.demap.SoftAlgorithm;
 import dev.fixmod.verify.formats.FileFormat;
 import dev.fixmod.verify.formats.RowWriter;
 import dev.fixmod.verify.formats.TableSpec;
+import dev.fixmod.verify.loss.Simulation;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.lang.management.ManagementFactory;
@@ -52,13 +52,14 @@ public final class Growth {
     static Row chain(String scenario, long symbols) {
         long start = System.nanoTime();
         long allocatedBefore = allocated();
-        MonteCarloChain chain = new MonteCarloChain(Workload.of(scenario), SoftAlgorithm.MAX_LOG_PER_AXIS,
-                Workload.BLOCK);
-        for (long s = 0; s < symbols; s += Workload.BLOCK) {
-            chain.run(s);
+        Simulation.Worker worker = Workload.of(scenario).chainWorker();
+        long done = 0;
+        for (long chunk = 0; done < symbols; chunk++) {
+            worker.run(chunk);
+            done += worker.symbols();
         }
         long bytes = allocated() - allocatedBefore;
-        return new Row("Monte Carlo chain", scenario, chain.symbols(), (System.nanoTime() - start) / 1e9, bytes);
+        return new Row("Monte Carlo chain", scenario, done, (System.nanoTime() - start) / 1e9, bytes);
     }
 
     static Row hex(long rows) throws IOException {

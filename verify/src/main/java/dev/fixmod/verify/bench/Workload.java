@@ -15,7 +15,11 @@ import dev.fixmod.map.FloatMapper;
 import dev.fixmod.verify.noise.Awgn;
 import dev.fixmod.verify.noise.Gaussian;
 import dev.fixmod.verify.noise.Philox4x32;
+import dev.fixmod.verify.loss.LossSpec;
+import dev.fixmod.verify.loss.LossSpecReader;
+import dev.fixmod.verify.loss.Simulation;
 import dev.fixmod.verify.noise.StreamKey;
+import java.util.Locale;
 
 /**
  * One benchmark scenario of our own: a unit-energy constellation at a fixed Es/N0, its ROM in {@link #INPUT}, and a
@@ -94,5 +98,24 @@ final class Workload {
 
     int bitsPerSymbol() {
         return constellation.bitsPerSymbol();
+    }
+
+    /**
+     * The Monte Carlo chain of a quantization-loss run on this QAM scenario, as {@code fixmod loss} runs it: a
+     * specification with this constellation, {@link #INPUT} as mapper and receiver input, per-axis max-log in float
+     * and fixed point with a {@link #LLR_OUTPUT} word, ziggurat noise, and chunks of {@link #BLOCK} symbols; the
+     * worker simulates its last grid point, this scenario's Es/N0. Each worker has its own demappers and scratch.
+     */
+    Simulation.Worker chainWorker() {
+        String spec = String.format(Locale.ROOT, "{\"constellation\": \"qam%d\","
+                + " \"mapper\": {\"format\": \"%s\"},"
+                + " \"demapper\": {\"input\": {\"format\": \"%s\", \"rounding\": \"half-even\","
+                + " \"overflow\": \"saturate\"}, \"algorithm\": \"max-log-per-axis\","
+                + " \"reference\": \"max-log-per-axis\", \"llr\": {\"format\": \"%s\"}},"
+                + " \"noise\": {\"es-n0-db\": [%s, %s], \"seed\": %d, \"gaussian\": \"ziggurat\"},"
+                + " \"simulation\": {\"chunk-symbols\": %d}}",
+                constellation.size(), INPUT.format(), INPUT.format(), LLR_OUTPUT, esN0Db - 3, esN0Db, SEED, BLOCK);
+        LossSpec loss = LossSpecReader.parse(spec, "chain benchmark " + name);
+        return Simulation.worker(loss, loss.base(), loss.ebN0Db().size() - 1);
     }
 }

@@ -62,32 +62,36 @@ public final class Simulation {
 
     /** Simulates design {@code d} (index {@code designIndex} of the run) at grid point {@code snr}. */
     public PointResult run(Design d, int designIndex, int snr) {
-        Constellation c = d.constellation();
-        double[] grid = spec.ebN0Db().stream().mapToDouble(Double::doubleValue).toArray();
-        double n0 = n0(c, grid[snr], spec.codeRate());
-        ConstellationRom tx = d.transmitRom();
-        ConstellationRom rx = d.receiveRom();
-        FixedLlrSpec llrSpec = d.llrSpec(rx, n0(c, grid[grid.length - 1], spec.codeRate()));
-        Point point = new Point(d, tx, rx, llrSpec, n0, snr);
+        Point point = new Point(spec, d, snr);
         LossSpec.Simulation rule = spec.simulation();
-        int k = c.bitsPerSymbol();
+        int k = d.constellation().bitsPerSymbol();
         long chunkBits = (long) rule.chunkSymbols() * k;
         long maxChunks = (rule.maxBits() + chunkBits - 1) / chunkBits;
         Accumulator total = new Accumulator(point);
+        // One worker per chunk in flight, each with its own demappers and scratch; a worker is reused only after
+        // its chunk was merged, since the whole batch is merged before the next one is submitted.
+        Worker[] workers = new Worker[(int) Math.min(parallel, maxChunks)];
         long next = 0;
         boolean stop = false;
         while (!stop) {
-            List<Future<Accumulator>> batch = new ArrayList<>();
-            for (int i = 0; i < parallel && next < maxChunks; i++, next++) {
+            List<Future<Worker>> batch = new ArrayList<>();
+            for (int i = 0; i < workers.length && next < maxChunks; i++, next++) {
+                if (workers[i] == null) {
+                    workers[i] = new Worker(point);
+                }
+                Worker w = workers[i];
                 long chunk = next;
-                batch.add(pool.submit(() -> point.chunk(chunk)));
+                batch.add(pool.submit(() -> {
+                    w.run(chunk);
+                    return w;
+                }));
             }
-            for (Future<Accumulator> f : batch) {
+            for (Future<Worker> f : batch) {
                 if (stop) {
                     f.cancel(false);
                     continue;
                 }
-                total.merge(get(f));
+                total.merge(get(f).chunk);
                 long bits = total.symbols * k;
                 stop = bits >= rule.maxBits() || (bits >= rule.minBits()
                         && total.floatBitErrors >= rule.targetErrors() && total.fixedBitErrors >= rule.targetErrors());
@@ -97,7 +101,15 @@ public final class Simulation {
         return total.result(designIndex, snr);
     }
 
-    private static Accumulator get(Future<Accumulator> f) {
+    /**
+     * A worker for the chunks of design {@code d} at grid point {@code snr} of {@code spec}: what {@link #run} uses
+     * for every chunk, for callers that run chunks themselves (the benchmarks).
+     */
+    public static Worker worker(LossSpec spec, Design d, int snr) {
+        return new Worker(new Point(spec, d, snr));
+    }
+
+    private static <T> T get(Future<T> f) {
         try {
             return f.get();
         } catch (InterruptedException e) {
@@ -111,10 +123,10 @@ public final class Simulation {
         }
     }
 
-    /** Everything a chunk needs; immutable, shared by the workers (each chunk builds its own demappers and noise). */
-    private final class Point {
+    /** Everything the chunks of one point share; immutable, read by every worker. */
+    private static final class Point {
+        final LossSpec spec;
         final Design design;
-        final ConstellationRom tx;
         final ConstellationRom rx;
         final FixedLlrSpec llrSpec;
         final double n0;
@@ -122,15 +134,22 @@ public final class Simulation {
         final boolean flat;
         final boolean turns;
         final QFormat outFormat;
+        /** The transmit ROM's points by label, in real units; π/2-BPSK's odd symbols use the turned ones. */
+        final double[] txRe;
+        final double[] txIm;
+        final double[] oddTxRe;
+        final double[] oddTxIm;
 
-        Point(Design design, ConstellationRom tx, ConstellationRom rx, FixedLlrSpec llrSpec, double n0, int snr) {
+        Point(LossSpec spec, Design design, int snr) {
+            this.spec = spec;
             this.design = design;
-            this.tx = tx;
-            this.rx = rx;
-            this.llrSpec = llrSpec;
-            this.n0 = n0;
             this.snr = snr;
             Constellation c = design.constellation();
+            double[] grid = spec.ebN0Db().stream().mapToDouble(Double::doubleValue).toArray();
+            this.n0 = n0(c, grid[snr], spec.codeRate());
+            ConstellationRom tx = design.transmitRom();
+            this.rx = design.receiveRom();
+            this.llrSpec = design.llrSpec(rx, n0(c, grid[grid.length - 1], spec.codeRate()));
             boolean f = true;
             for (int label = 0; label < c.size(); label++) {
                 f &= c.im(label) == 0.0;
@@ -139,30 +158,96 @@ public final class Simulation {
             // π/2-BPSK's odd symbols leave the I axis even when the even ones lie on it.
             this.flat = f && !turns;
             this.outFormat = llrSpec.output().format();
+            QFormat txf = tx.format();
+            this.txRe = new double[c.size()];
+            this.txIm = new double[c.size()];
+            this.oddTxRe = new double[c.size()];
+            this.oddTxIm = new double[c.size()];
+            for (int label = 0; label < c.size(); label++) {
+                txRe[label] = txf.toDouble(tx.iCode(label));
+                txIm[label] = txf.toDouble(tx.qCode(label));
+                oddTxRe[label] = txf.toDouble(tx.oddICode(label));
+                oddTxIm[label] = txf.toDouble(tx.oddQCode(label));
+            }
+        }
+    }
+
+    /**
+     * Runs chunks of one point: chunk c holds symbols c·chunkSymbols … (c+1)·chunkSymbols − 1 (see the class
+     * comment). Holds its own demappers and scratch, built once, so a chunk allocates nothing; not thread-safe (one
+     * worker per thread). The counts of the last chunk run are read from the accessors.
+     */
+    public static final class Worker {
+        private final Point point;
+        private final Constellation c;
+        private final int n;
+        private final int k;
+        private final int mask;
+        private final StreamKey labelKey;
+        private final StreamKey noiseKey;
+        private final Awgn awgn;
+        private final SoftDemapper reference;
+        private final FixedSoftDemapper datapath;
+        /** The datapath's stage counters, read after each chunk. */
+        private final List<OverflowCounter> counters;
+        private final Quantizer input;
+        private final double gain;
+        private final OverflowCounter clips = new OverflowCounter("input");
+        private final int[] words;
+        private final double[] ni;
+        private final double[] nq;
+        private final byte[] bits;
+        private final double[] re;
+        private final double[] im;
+        private final int[] ci;
+        private final int[] cq;
+        private final double[] llrF;
+        private final int[] llrC;
+        private final Accumulator chunk;
+
+        private Worker(Point point) {
+            this.point = point;
+            Design d = point.design;
+            this.c = d.constellation();
+            this.n = point.spec.simulation().chunkSymbols();
+            this.k = c.bitsPerSymbol();
+            this.mask = c.size() - 1;
+            long seed = point.spec.seed();
+            this.labelKey = StreamKey.of(seed, 2L * point.snr + 1);
+            this.noiseKey = StreamKey.of(seed, 2L * point.snr);
+            this.awgn = new Awgn(point.n0, Gaussian.fromName(point.spec.gaussian()));
+            this.reference = d.floatDemapper(point.n0);
+            this.datapath = d.fixedDemapper(point.rx, point.llrSpec, point.n0);
+            this.counters = datapath.counters();
+            this.input = d.inputQuantizer();
+            this.gain = d.gain();
+            this.words = new int[n];
+            this.ni = new double[n];
+            this.nq = new double[n];
+            this.bits = new byte[n * k];
+            this.re = new double[n];
+            this.im = new double[n];
+            this.ci = new int[n];
+            this.cq = new int[n];
+            this.llrF = new double[n * k];
+            this.llrC = new int[n * k];
+            this.chunk = new Accumulator(point);
         }
 
-        Accumulator chunk(long index) {
-            Constellation c = design.constellation();
-            int n = spec.simulation().chunkSymbols();
-            int k = c.bitsPerSymbol();
-            int mask = c.size() - 1;
+        /** Runs chunk {@code index}, replacing the counts of the previous one. */
+        public void run(long index) {
             long first = index * n;
-            int[] words = new int[n];
-            Philox4x32.fillWords(words, 0, n, StreamKey.of(spec.seed(), 2L * snr + 1), first);
-            double[] ni = new double[n];
-            double[] nq = new double[n];
-            new Awgn(n0, Gaussian.fromName(spec.gaussian())).fill(ni, 0, nq, 0, n, StreamKey.of(spec.seed(), 2L * snr),
-                    first);
-            byte[] bits = new byte[n * k];
-            double[] re = new double[n];
-            double[] im = new double[n];
-            int[] ci = new int[n];
-            int[] cq = new int[n];
-            double gain = design.gain();
-            Quantizer input = design.inputQuantizer();
-            QFormat in = input.format();
-            QFormat txf = tx.format();
-            OverflowCounter clips = new OverflowCounter("input");
+            Philox4x32.fillWords(words, 0, n, labelKey, first);
+            awgn.fill(ni, 0, nq, 0, n, noiseKey, first);
+            boolean flat = point.flat;
+            boolean turns = point.turns;
+            double[] txRe = point.txRe;
+            double[] txIm = point.txIm;
+            double[] oddTxRe = point.oddTxRe;
+            double[] oddTxIm = point.oddTxIm;
+            // code · 2^−n as a product: exact (|code| < 2^31, n ≤ 64), the same double as QFormat.toDouble.
+            double lsb = input.format().lsb();
+            clips.reset();
             double error = 0;
             for (int s = 0; s < n; s++) {
                 int label = words[s] & mask;
@@ -172,54 +257,78 @@ public final class Simulation {
                 boolean odd = turns && ((first + s) & 1) != 0;
                 re[s] = (odd ? -c.im(label) + 0.0 : c.re(label)) + ni[s];
                 im[s] = (odd ? c.re(label) : c.im(label)) + nq[s];
-                double xi = gain * (txf.toDouble(odd ? tx.oddICode(label) : tx.iCode(label)) + ni[s]);
+                double xi = gain * ((odd ? oddTxRe[label] : txRe[label]) + ni[s]);
                 ci[s] = (int) input.quantize(xi, clips);
-                double ei = in.toDouble(ci[s]) - xi;
+                double ei = ci[s] * lsb - xi;
                 error += ei * ei;
                 if (!flat) {
-                    double xq = gain * (txf.toDouble(odd ? tx.oddQCode(label) : tx.qCode(label)) + nq[s]);
+                    double xq = gain * ((odd ? oddTxIm[label] : txIm[label]) + nq[s]);
                     cq[s] = (int) input.quantize(xq, clips);
-                    double eq = in.toDouble(cq[s]) - xq;
+                    double eq = cq[s] * lsb - xq;
                     error += eq * eq;
                 }
             }
-            double[] llrF = new double[n * k];
-            int[] llrC = new int[n * k];
-            SoftDemapper reference = design.floatDemapper(n0);
             reference.llr(re, flat ? null : im, 0, n, first, llrF, 0);
-            FixedSoftDemapper datapath = design.fixedDemapper(rx, llrSpec, n0);
+            datapath.resetCounters();
             datapath.llr(ci, flat ? null : cq, 0, n, first, llrC, 0);
 
-            Accumulator a = new Accumulator(this);
+            Accumulator a = chunk;
+            a.reset();
             a.symbols = n;
+            long floatBitErrors = 0;
+            long fixedBitErrors = 0;
+            long floatSymbolErrors = 0;
+            long fixedSymbolErrors = 0;
             for (int s = 0; s < n; s++) {
-                boolean floatWrong = false;
-                boolean fixedWrong = false;
+                // Counted without branches: an error is as unpredictable as the noise.
+                int floatWrong = 0;
+                int fixedWrong = 0;
                 for (int b = 0; b < k; b++) {
                     int i = s * k + b;
                     int bit = bits[i];
-                    if ((llrF[i] < 0 ? 1 : 0) != bit) {
-                        a.floatBitErrors++;
-                        floatWrong = true;
-                    }
-                    if ((llrC[i] < 0 ? 1 : 0) != bit) {
-                        a.fixedBitErrors++;
-                        fixedWrong = true;
-                    }
+                    floatWrong += (llrF[i] < 0 ? 1 : 0) ^ bit;
+                    fixedWrong += (llrC[i] >>> 31) ^ bit;
                 }
-                a.floatSymbolErrors += floatWrong ? 1 : 0;
-                a.fixedSymbolErrors += fixedWrong ? 1 : 0;
+                floatBitErrors += floatWrong;
+                fixedBitErrors += fixedWrong;
+                floatSymbolErrors += (-floatWrong) >>> 31;
+                fixedSymbolErrors += (-fixedWrong) >>> 31;
             }
+            a.floatBitErrors = floatBitErrors;
+            a.fixedBitErrors = fixedBitErrors;
+            a.floatSymbolErrors = floatSymbolErrors;
+            a.fixedSymbolErrors = fixedSymbolErrors;
             a.gmi.add(llrF, 0, bits, 0, n * k);
             a.histogram.add(llrC, 0, bits, 0, n * k);
             a.inputErrorEnergy = error;
             a.inputSamples = flat ? n : 2L * n;
             a.inputClips = clips.events();
-            List<OverflowCounter> counters = datapath.counters();
             a.metricEvents = counters.get(0).events();
             a.scaleEvents = counters.get(1).events();
             a.outputEvents = counters.get(2).events();
-            return a;
+        }
+
+        /** The symbols of the last chunk. */
+        public long symbols() {
+            return chunk.symbols;
+        }
+
+        /** The bit errors of the float reference in the last chunk. */
+        public long floatBitErrors() {
+            return chunk.floatBitErrors;
+        }
+
+        /** The bit errors of the fixed datapath in the last chunk. */
+        public long fixedBitErrors() {
+            return chunk.fixedBitErrors;
+        }
+
+        /**
+         * The last chunk as a point result ({@code design} and {@code snr} are labels only); allocates: not for
+         * inner loops.
+         */
+        public PointResult result(int design, int snr) {
+            return chunk.result(design, snr);
         }
     }
 
@@ -245,6 +354,23 @@ public final class Simulation {
             int k = point.design.constellation().bitsPerSymbol();
             this.gmi = new GmiEstimator(k);
             this.histogram = new LlrHistogram(k, (int) point.outFormat.minCode(), (int) point.outFormat.maxCode());
+        }
+
+        /** Back to no samples, as built. */
+        void reset() {
+            symbols = 0;
+            floatBitErrors = 0;
+            floatSymbolErrors = 0;
+            fixedBitErrors = 0;
+            fixedSymbolErrors = 0;
+            gmi.reset();
+            histogram.reset();
+            inputErrorEnergy = 0;
+            inputSamples = 0;
+            inputClips = 0;
+            metricEvents = 0;
+            scaleEvents = 0;
+            outputEvents = 0;
         }
 
         void merge(Accumulator o) {

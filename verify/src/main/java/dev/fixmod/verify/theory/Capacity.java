@@ -106,10 +106,22 @@ public final class Capacity {
         return 1 - sum / StrictMath.sqrt(StrictMath.PI) / LN2;
     }
 
-    /** ln(1 + e^x) without overflow or loss of small values. */
+    /**
+     * ln(1 + e^x) without overflow or loss of small values: {@code x + log1p(exp(−x))} for x &gt; 0, else
+     * {@code log1p(exp(x))}, with StrictMath. For an argument e &lt; 2^−29 of log1p the result is written out as
+     * fdlibm's log1p (which StrictMath is specified to be) computes it, e − e·e·0.5 (e itself below 2^−54), the same
+     * double without the native call; a test compares it with {@code StrictMath.log1p}. Confident LLRs (|x| above
+     * about 20 nats) all take that path.
+     */
     static double softplus(double x) {
-        return x > 0 ? x + StrictMath.log1p(StrictMath.exp(-x)) : StrictMath.log1p(StrictMath.exp(x));
+        double e = StrictMath.exp(x > 0 ? -x : x);
+        double log1p = e < TINY ? (e < NEGLIGIBLE ? e : e - e * e * 0.5) : StrictMath.log1p(e);
+        return x > 0 ? x + log1p : log1p;
     }
+
+    /** 2^−29 and 2^−54: fdlibm's log1p returns e − e·e·0.5 below the first and e below the second. */
+    static final double TINY = 0x1p-29;
+    static final double NEGLIGIBLE = 0x1p-54;
 
     private static double rate(Constellation constellation, double esN0, int points, boolean bitwise) {
         ErrorRates.requireSnr(esN0);

@@ -1,5 +1,7 @@
 package dev.fixmod.verify.theory;
 
+import java.util.Arrays;
+
 /**
  * Accumulates the standard estimate of the generalized mutual information (GMI) of bit-metric decoding from LLRs and
  * the bits that were sent, for uniform bits:
@@ -68,6 +70,14 @@ public final class GmiEstimator {
             }
         }
         position += length;
+    }
+
+    /** Forgets every sample: the estimator is as new. */
+    public void reset() {
+        Arrays.fill(sum, 0.0);
+        Arrays.fill(compensation, 0.0);
+        Arrays.fill(count, 0);
+        position = 0;
     }
 
     /** Adds the sums of {@code other} (same k, a whole number of symbols so far) into this one. */

@@ -1,5 +1,6 @@
 package dev.fixmod.verify.theory;
 
+import java.util.Arrays;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -74,6 +75,12 @@ public final class LlrHistogram {
             }
         }
         position += length;
+    }
+
+    /** Forgets every code: the histogram is as new. */
+    public void reset() {
+        Arrays.fill(counts, 0);
+        position = 0;
     }
 
     /** Adds the counts of {@code other} (same k and code range, whole symbols so far). */

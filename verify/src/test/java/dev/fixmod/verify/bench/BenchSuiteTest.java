@@ -5,18 +5,20 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.fixmod.demap.FixedSoftDemapper;
 import dev.fixmod.demap.SoftAlgorithm;
-import dev.fixmod.demap.SoftDemapper;
-import dev.fixmod.fixed.OverflowCounter;
 import dev.fixmod.verify.cli.FixmodCommand;
-import dev.fixmod.verify.theory.GmiEstimator;
+import dev.fixmod.verify.loss.LossSpec;
+import dev.fixmod.verify.loss.LossSpecReader;
+import dev.fixmod.verify.loss.PointResult;
+import dev.fixmod.verify.loss.Simulation;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
 import org.junit.jupiter.api.Test;
 
 /** The suite is built and wired: no timing is asserted anywhere. */
@@ -83,54 +85,30 @@ class BenchSuiteTest {
     }
 
     @Test
-    void theChainCountsWhatTheKernelComputes() {
+    void theChainBenchmarkRunsTheLossEnginesChunks() throws Exception {
         Workload w = Workload.of("16-qam");
-        MonteCarloChain chain = new MonteCarloChain(w, SoftAlgorithm.MAX_LOG_PER_AXIS, 512);
-        chain.run(0);
-        int k = w.bitsPerSymbol();
-        OverflowCounter clip = OverflowCounter.unnamed();
-        double[] re = chain.received(false);
-        double[] im = chain.received(true);
-        for (int n = 0; n < 512; n++) {
-            assertEquals(Workload.INPUT.quantize(re[n], clip), chain.iCodes()[n], "ADC, I of " + n);
-            assertEquals(Workload.INPUT.quantize(im[n], clip), chain.qCodes()[n], "ADC, Q of " + n);
+        Simulation.Worker worker = w.chainWorker();
+        LossSpec spec = LossSpecReader.parse("{\"constellation\": \"qam16\", \"mapper\": {\"format\": \"Q2.12\"},"
+                + " \"demapper\": {\"input\": {\"format\": \"Q2.12\", \"rounding\": \"half-even\"},"
+                + " \"algorithm\": \"max-log-per-axis\", \"reference\": \"max-log-per-axis\","
+                + " \"llr\": {\"format\": \"Q5.2\"}}, \"noise\": {\"es-n0-db\": [9, 12], \"seed\": "
+                + Workload.SEED + ", \"gaussian\": \"ziggurat\"}, \"simulation\": {\"chunk-symbols\": "
+                + Workload.BLOCK + ", \"min-bits\": 0, \"max-bits\": " + Workload.BLOCK * 4 + "}}", "test");
+        ExecutorService pool = Executors.newSingleThreadExecutor();
+        try {
+            // A one-chunk point of 'fixmod loss' is the benchmark's first chunk, count for count.
+            PointResult point = new Simulation(spec, pool, 1).run(spec.base(), 0, 1);
+            worker.run(0);
+            assertEquals(point, worker.result(0, 1));
+            assertEquals(Workload.BLOCK, worker.symbols());
+            assertTrue(worker.floatBitErrors() > 0 && worker.fixedBitErrors() > 0, "errors at Es/N0 12 dB");
+            // A reused worker carries nothing over from the chunk before.
+            worker.run(1);
+            worker.run(0);
+            assertEquals(point, worker.result(0, 1));
+        } finally {
+            pool.shutdownNow();
         }
-        // The float GMI from the interpolated penalty is within 3.1e-5 nat per bit of the per-sample estimate.
-        SoftDemapper floating = SoftDemapper.create(SoftAlgorithm.MAX_LOG_PER_AXIS, w.constellation, w.options);
-        double[] llr = new double[512 * k];
-        floating.llr(re, im, 0, 512, llr, 0);
-        byte[] bits = sentBits(chain, w, 512);
-        GmiEstimator exact = new GmiEstimator(k);
-        exact.add(llr, 0, bits, 0, llr.length);
-        double bound = k * 3.1e-5 / Math.log(2);
-        assertEquals(exact.gmi(), chain.floatGmi(), bound);
-        long errors = 0;
-        for (int i = 0; i < llr.length; i++) {
-            errors += bits[i] ^ (llr[i] < 0 ? 1 : 0);
-        }
-        assertEquals(errors, chain.floatBitErrors());
-        FixedSoftDemapper fixed = LlrBench.fixedDemapper(SoftAlgorithm.MAX_LOG_PER_AXIS, w);
-        int[] codes = new int[512 * k];
-        fixed.llr(chain.iCodes(), chain.qCodes(), 0, 512, codes, 0);
-        long fixedErrors = 0;
-        for (int i = 0; i < codes.length; i++) {
-            fixedErrors += bits[i] ^ (codes[i] < 0 ? 1 : 0);
-        }
-        assertEquals(fixedErrors, chain.fixedBitErrors());
-        assertTrue(chain.fixedGmi() > 0 && chain.fixedGmi() <= k, "GMI " + chain.fixedGmi());
-    }
-
-    /** The label bits of the chain's symbols, recomputed from its label stream. */
-    private static byte[] sentBits(MonteCarloChain chain, Workload w, int count) {
-        int k = w.bitsPerSymbol();
-        int[] labels = chain.labels();
-        byte[] bits = new byte[count * k];
-        for (int n = 0; n < count; n++) {
-            for (int b = 0; b < k; b++) {
-                bits[n * k + b] = (byte) ((labels[n] >>> (k - 1 - b)) & 1);
-            }
-        }
-        return bits;
     }
 
     private record Run(int status, String out, String err) {

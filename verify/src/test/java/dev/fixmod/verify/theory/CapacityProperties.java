@@ -1,5 +1,7 @@
 package dev.fixmod.verify.theory;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import dev.fixmod.constellation.Constellation;
 import dev.fixmod.constellation.Constellations;
 import java.util.Random;
@@ -62,5 +64,31 @@ class CapacityProperties {
         double bicm = Capacity.bitInterleaved(c, esN0);
         return bicm <= cm + QUADRATURE && cm <= Capacity.shannon(esN0) + QUADRATURE
                 && cm <= c.bitsPerSymbol() + QUADRATURE && bicm >= -QUADRATURE;
+    }
+
+    @Provide
+    Arbitrary<Double> llrs() {
+        // Around the two thresholds of fdlibm's small-argument path (e^x = 2^-29 and 2^-54), and everywhere else.
+        Arbitrary<Double> nearThresholds = Arbitraries.of(-29.0, -54.0).flatMap(p ->
+                Arbitraries.integers().between(-2000, 2000).map(u -> {
+                    double x = p * StrictMath.log(2.0);
+                    for (int step = 0; step < Math.abs(u); step++) {
+                        x = u < 0 ? Math.nextDown(x) : Math.nextUp(x);
+                    }
+                    return x;
+                }));
+        return Arbitraries.oneOf(nearThresholds, Arbitraries.doubles().between(-800, 800),
+                Arbitraries.doubles().between(-60, 60), Arbitraries.of(0.0, -0.0, 745.2, -745.2, 1e300, -1e300));
+    }
+
+    @Property(tries = 3000)
+    void softplusIsTheStrictMathFormulaBitForBit(@ForAll("llrs") double x, @ForAll("llrs") double y) {
+        // The JDK's StrictMath (fdlibm semantics) is the reference; softplus only skips the call where fdlibm's
+        // log1p would return its argument's short series.
+        for (double v : new double[] {x, y, -x, x + y}) {
+            double want = v > 0 ? v + StrictMath.log1p(StrictMath.exp(-v)) : StrictMath.log1p(StrictMath.exp(v));
+            assertEquals(Double.doubleToRawLongBits(want),
+                    Double.doubleToRawLongBits(Capacity.softplus(v)), "softplus(" + v + ")");
+        }
     }
 }
