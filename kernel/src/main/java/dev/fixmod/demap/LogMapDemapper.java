@@ -16,43 +16,18 @@ import dev.fixmod.map.DatapathCost;
  *
  * <p>Not thread-safe: holds M-entry scratch arrays.
  */
-public final class LogMapDemapper extends SoftDemapper {
+public final class LogMapDemapper extends ExhaustiveDemapper {
     /** Below this gap (nats) between a half's best metric and the overall best, the shared exponentials suffice. */
     private static final double SHARED_RANGE = 600.0;
 
-    private final double[] re;
-    private final double[] im;
-    /** The points of odd-index symbols: π/2-BPSK's turned points, else the same arrays. */
-    private final double[] oddRe;
-    private final double[] oddIm;
-    private final double[] logPrior;
-    private final boolean priors;
-    private final double invN0;
-    private final BitPartition partition;
     private final double[] metric;
     private final double[] relative;
 
     public LogMapDemapper(Constellation constellation, LlrOptions options) {
         super(SoftAlgorithm.LOG_MAP, constellation, options);
         int m = constellation.size();
-        this.re = constellation.realParts();
-        this.im = constellation.imaginaryParts();
-        this.oddRe = constellation.alternatesQuarterTurn() ? turnedRe(im) : re;
-        this.oddIm = constellation.alternatesQuarterTurn() ? re : im;
-        this.priors = options.usesPriors(constellation);
-        this.logPrior = new double[m];
-        for (int label = 0; label < m; label++) {
-            logPrior[label] = priors ? StrictMath.log(constellation.probability(label)) : 0.0;
-        }
-        this.invN0 = 1.0 / options.n0();
-        this.partition = new BitPartition(bitsPerSymbol);
         this.metric = new double[m];
         this.relative = new double[m];
-    }
-
-    @Override
-    void compute(double yRe, double yIm, double[] llr, int llrOffset) {
-        compute(yRe, yIm, false, llr, llrOffset);
     }
 
     @Override

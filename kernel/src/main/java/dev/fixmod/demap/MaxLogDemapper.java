@@ -11,39 +11,13 @@ import dev.fixmod.map.DatapathCost;
  *
  * <p>Not thread-safe: holds an M-entry scratch array.
  */
-public final class MaxLogDemapper extends SoftDemapper {
-    private final double[] re;
-    private final double[] im;
-    /** The points of odd-index symbols: π/2-BPSK's turned points, else the same arrays. */
-    private final double[] oddRe;
-    private final double[] oddIm;
-    private final double[] logPrior;
-    private final boolean priors;
-    private final double invN0;
-    private final BitPartition partition;
+public final class MaxLogDemapper extends ExhaustiveDemapper {
     /** Per point: the squared distance, or with priors the metric {@code ln p(s) − d/N0}. */
     private final double[] distance;
 
     public MaxLogDemapper(Constellation constellation, LlrOptions options) {
         super(SoftAlgorithm.MAX_LOG, constellation, options);
-        int m = constellation.size();
-        this.re = constellation.realParts();
-        this.im = constellation.imaginaryParts();
-        this.oddRe = constellation.alternatesQuarterTurn() ? turnedRe(im) : re;
-        this.oddIm = constellation.alternatesQuarterTurn() ? re : im;
-        this.priors = options.usesPriors(constellation);
-        this.logPrior = new double[m];
-        for (int label = 0; label < m; label++) {
-            logPrior[label] = priors ? StrictMath.log(constellation.probability(label)) : 0.0;
-        }
-        this.invN0 = 1.0 / options.n0();
-        this.partition = new BitPartition(bitsPerSymbol);
-        this.distance = new double[m];
-    }
-
-    @Override
-    void compute(double yRe, double yIm, double[] llr, int llrOffset) {
-        compute(yRe, yIm, false, llr, llrOffset);
+        this.distance = new double[constellation.size()];
     }
 
     @Override

@@ -154,9 +154,7 @@ public final class LossReport {
                     g.writeStartObject();
                     g.writeStringField("value", r.value());
                     g.writeNumberField("design", r.design());
-                    num(g, "loss-at-ber-db", Numbers.fixed(r.lossBerDb(), 4));
-                    num(g, "loss-at-gmi-db", Numbers.fixed(r.lossGmiDb(), 4));
-                    g.writeBooleanField("within-budget", r.withinBudget());
+                    losses(g, r.lossBerDb(), r.lossGmiDb(), r.withinBudget());
                     g.writeEndObject();
                 }
                 g.writeEndArray();
@@ -166,35 +164,23 @@ public final class LossReport {
             g.writeArrayFieldStart("grids");
             for (LossAnalysis.GridSizing s : analysis.grids()) {
                 g.writeStartObject();
-                g.writeArrayFieldStart("parameters");
-                for (String p : s.parameters()) {
-                    g.writeString(p);
-                }
-                g.writeEndArray();
+                g.writeFieldName("parameters");
+                strings(g, s.parameters());
                 g.writeFieldName("chosen");
                 if (s.chosen() < 0) {
                     g.writeNull();
                 } else {
-                    g.writeStartArray();
-                    for (String v : s.rows().get(s.chosen()).values()) {
-                        g.writeString(v);
-                    }
-                    g.writeEndArray();
+                    strings(g, s.rows().get(s.chosen()).values());
                 }
                 g.writeStringField("reason", s.reason());
                 g.writeArrayFieldStart("tried");
                 for (LossAnalysis.GridRow r : s.rows()) {
                     g.writeStartObject();
-                    g.writeArrayFieldStart("values");
-                    for (String v : r.values()) {
-                        g.writeString(v);
-                    }
-                    g.writeEndArray();
+                    g.writeFieldName("values");
+                    strings(g, r.values());
                     g.writeNumberField("design", r.design());
                     g.writeNumberField("bits", r.bits());
-                    num(g, "loss-at-ber-db", Numbers.fixed(r.lossBerDb(), 4));
-                    num(g, "loss-at-gmi-db", Numbers.fixed(r.lossGmiDb(), 4));
-                    g.writeBooleanField("within-budget", r.withinBudget());
+                    losses(g, r.lossBerDb(), r.lossGmiDb(), r.withinBudget());
                     g.writeEndObject();
                 }
                 g.writeEndArray();
@@ -204,6 +190,21 @@ public final class LossReport {
             g.writeEndObject();
             g.writeRaw('\n');
         }
+    }
+
+    private static void strings(JsonGenerator g, Iterable<String> values) throws IOException {
+        g.writeStartArray();
+        for (String v : values) {
+            g.writeString(v);
+        }
+        g.writeEndArray();
+    }
+
+    /** A sizing row's losses (4 decimals, null when not available) and its budget verdict. */
+    private static void losses(JsonGenerator g, double berDb, double gmiDb, boolean within) throws IOException {
+        num(g, "loss-at-ber-db", Numbers.fixed(berDb, 4));
+        num(g, "loss-at-gmi-db", Numbers.fixed(gmiDb, 4));
+        g.writeBooleanField("within-budget", within);
     }
 
     /** A formatted number as a JSON number, or null when it is not available. */

@@ -103,14 +103,7 @@ public final class LossSpecReader {
      * @throws IllegalArgumentException with the one-line message described above
      */
     public static LossSpec parse(String text, String source) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            String where = at == null ? source : source + ":" + at.getLineNr() + ":" + at.getColumnNr();
-            throw new IllegalArgumentException(where + ": not valid JSON: " + e.getOriginalMessage());
-        }
+        JsonNode root = readTree(MAPPER, text, source);
         if (root == null || root.isMissingNode()) {
             throw new IllegalArgumentException(source + ": empty specification; expected a JSON object such as"
                     + " {\"constellation\": \"qam16\"}");
@@ -119,6 +112,17 @@ public final class LossSpecReader {
     }
 
     /** Where each JSON pointer's value starts in {@code text}, which must be valid JSON. */
+    /** Parses JSON text; a syntax error becomes one message placed at {@code source:line:column}. */
+    static JsonNode readTree(ObjectMapper mapper, String text, String source) {
+        try {
+            return mapper.readTree(text);
+        } catch (JsonProcessingException e) {
+            JsonLocation at = e.getLocation();
+            String where = at == null ? source : source + ":" + at.getLineNr() + ":" + at.getColumnNr();
+            throw new IllegalArgumentException(where + ": not valid JSON: " + e.getOriginalMessage());
+        }
+    }
+
     static Map<String, JsonLocation> locate(String text) {
         Map<String, JsonLocation> map = new HashMap<>();
         try (JsonParser p = new JsonFactory().createParser(text)) {

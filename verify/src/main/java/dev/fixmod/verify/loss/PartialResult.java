@@ -4,7 +4,6 @@ import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -90,14 +89,7 @@ public record PartialResult(String specText, String specSource, int shard, int s
      *                                  {@code points[3].float-bit-errors}) and what was expected
      */
     public static PartialResult read(String text, String source) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            String where = at == null ? source : source + ":" + at.getLineNr() + ":" + at.getColumnNr();
-            throw new IllegalArgumentException(where + ": not valid JSON: " + e.getOriginalMessage());
-        }
+        JsonNode root = LossSpecReader.readTree(MAPPER, text, source);
         if (root == null || !root.isObject() || !SCHEMA.equals(root.path("schema").asText())) {
             throw new IllegalArgumentException(source + ": not a partial loss result (schema \"" + SCHEMA
                     + "\" expected); give the files written by 'fixmod loss SPEC --shard i/n -o FILE'");
