@@ -33,7 +33,7 @@ import picocli.CommandLine.Parameters;
         mixinStandardHelpOptions = true,
         subcommands = {LossCommand.Merge.class},
         description = {"Simulates the float reference and the fixed-point model on the same noise and writes"
-                + " report.md, report.html, results.json and results.csv into a new folder.",
+                + " report.md, report.html, results.json, results.csv and sizing.csv into a new folder.",
                 "Without SPEC, runs the built-in 16-QAM demo specification."},
         footer = {"", "Examples:",
                 "  fixmod loss verify/src/main/resources/examples/crane-link-16qam.json -o loss-report",
